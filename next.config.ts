@@ -1,6 +1,7 @@
 import type { NextConfig } from "next";
 
 const nextConfig: NextConfig = {
+  experimental: { authInterrupts: true },
   poweredByHeader: false,
   reactStrictMode: true,
 };

@@ -1,0 +1,19 @@
+import { BrandLink } from "@/components/brand";
+
+export default function PublicLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <div className="flex min-h-dvh flex-col">
+      <header className="border-b border-rule bg-panel/60">
+        <div className="mx-auto flex h-14 max-w-5xl items-center justify-between px-4 sm:px-6">
+          <BrandLink />
+        </div>
+      </header>
+      <main id="main" className="flex-1">{children}</main>
+      <footer className="border-t border-rule text-sm text-ink-soft">
+        <div className="mx-auto max-w-5xl px-4 py-5 sm:px-6">
+          Towmargin does the arithmetic; the vehicle maker&rsquo;s and the labels&rsquo; ratings, local law and a licensed installer have the last word.
+        </div>
+      </footer>
+    </div>
+  );
+}

@@ -1,0 +1,32 @@
+"use server";
+import { redirect } from "next/navigation";
+import { confirmSignup, requestSignup } from "@/lib/server/accounts";
+import { limitAuthAttempt } from "@/lib/server/auth-limits";
+import { startSession } from "@/lib/server/session";
+import { signUpSchema } from "@/lib/validation/auth";
+import { invalid, type FormState } from "@/lib/validation/form-state";
+import { z } from "zod";
+
+export async function signUp(_previous: FormState, formData: FormData): Promise<FormState> {
+  const parsed = signUpSchema.safeParse(Object.fromEntries(formData));
+  if (!parsed.success) return invalid(parsed.error.issues);
+
+  const refusal = await limitAuthAttempt("sign-up", parsed.data.email);
+  if (refusal) return { ok: false, message: refusal };
+
+  const sent = await requestSignup(parsed.data);
+  if (!sent) return { ok: false, message: "We could not send mail just now. Try again in a moment." };
+  // The same answer whether or not the address already has an account.
+  return { ok: true, message: `Check your inbox at ${parsed.data.email}: we sent a link to finish signing up.` };
+}
+
+const confirmSchema = z.object({ token: z.string().min(10).max(200) });
+
+export async function finishSignup(_previous: FormState, formData: FormData): Promise<FormState> {
+  const parsed = confirmSchema.safeParse(Object.fromEntries(formData));
+  if (!parsed.success) return { ok: false, message: "This link is not complete. Open it again from the mail." };
+  const created = await confirmSignup(parsed.data.token);
+  if (!created) return { ok: false, message: "This link has been used or has expired. Sign in, or sign up again." };
+  await startSession(created.userId, created.organisationId);
+  redirect("/overview?welcome=1");
+}

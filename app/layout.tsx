@@ -1,0 +1,25 @@
+import type { Metadata, Viewport } from "next";
+import { sans, mono } from "./fonts";
+import "./globals.css";
+
+export const metadata: Metadata = {
+  title: { default: "Towmargin", template: "%s · Towmargin" },
+  description: "Check a trailer, rack or carrier against every rating of the vehicle and the hitch, and see why.",
+};
+
+export const viewport: Viewport = {
+  width: "device-width",
+  initialScale: 1,
+  themeColor: [
+    { media: "(prefers-color-scheme: light)", color: "#f6f4ef" },
+    { media: "(prefers-color-scheme: dark)", color: "#15171a" },
+  ],
+};
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en" className={`${sans.variable} ${mono.variable}`}>
+      <body className="min-h-dvh antialiased">{children}</body>
+    </html>
+  );
+}

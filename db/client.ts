@@ -1,0 +1,52 @@
+import { createClient, type Client } from "@libsql/client";
+import { drizzle, type LibSQLDatabase } from "drizzle-orm/libsql";
+import { mkdirSync } from "node:fs";
+import { dirname, resolve } from "node:path";
+import { env } from "../lib/env";
+import * as schema from "./schema";
+
+export type Database = LibSQLDatabase<typeof schema>;
+
+interface DatabaseHandle {
+  client: Client;
+  db: Database;
+  ready: Promise<void>;
+}
+
+/**
+ * One client per process. A local file gets WAL (readers never wait for the writer), foreign keys and a
+ * busy timeout; a libSQL server URL (libsql://, https://, ws://) is used as it is, with its auth token.
+ */
+function open(url: string, authToken: string | undefined): DatabaseHandle {
+  const isLocalFile = url.startsWith("file:");
+  if (isLocalFile) {
+    const path = url.slice("file:".length);
+    if (path && path !== ":memory:") mkdirSync(dirname(resolve(path)), { recursive: true });
+  }
+  const client = createClient({ url, authToken });
+  const ready = (async () => {
+    if (isLocalFile) {
+      await client.execute("PRAGMA journal_mode = WAL");
+      await client.execute("PRAGMA busy_timeout = 5000");
+      await client.execute("PRAGMA synchronous = NORMAL");
+    }
+    await client.execute("PRAGMA foreign_keys = ON");
+  })();
+  return { client, db: drizzle(client, { schema }), ready };
+}
+
+const globalForDb = globalThis as unknown as { towmarginDb?: DatabaseHandle };
+
+export function databaseHandle(): DatabaseHandle {
+  if (!globalForDb.towmarginDb) {
+    globalForDb.towmarginDb = open(env.DATABASE_URL, env.DATABASE_AUTH_TOKEN || undefined);
+  }
+  return globalForDb.towmarginDb;
+}
+
+/** The database, with its connection settings applied. */
+export async function getDb(): Promise<Database> {
+  const handle = databaseHandle();
+  await handle.ready;
+  return handle.db;
+}

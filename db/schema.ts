@@ -1,0 +1,123 @@
+import { sql } from "drizzle-orm";
+import { index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
+import { ROLES } from "../lib/roles";
+
+const timestampNow = (name = "created_at") =>
+  integer(name, { mode: "timestamp_ms" })
+    .notNull()
+    .default(sql`(unixepoch('subsec') * 1000)`);
+
+export const users = sqliteTable("users", {
+  id: text("id").primaryKey(),
+  /** Stored lower-cased and trimmed: one address, one account. */
+  email: text("email").notNull().unique(),
+  name: text("name").notNull(),
+  passwordHash: text("password_hash").notNull(),
+  createdAt: timestampNow(),
+});
+
+export const organisations = sqliteTable("organisations", {
+  id: text("id").primaryKey(),
+  name: text("name").notNull(),
+  kind: text("kind", { enum: ["shop", "fleet"] }).notNull(),
+  units: text("units", { enum: ["imperial", "metric"] }).notNull().default("imperial"),
+  /** A check whose margin is under this share of its limit is reported as tight. */
+  tightMarginRatio: real("tight_margin_ratio").notNull().default(0.1),
+  createdAt: timestampNow(),
+});
+
+export const sessions = sqliteTable(
+  "sessions",
+  {
+    id: text("id").primaryKey(),
+    userId: text("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    /** Seconds since the epoch, as the session library stores it. */
+    expiresAt: integer("expires_at").notNull(),
+    /** The organisation this session works in; checked against memberships on every request. */
+    organisationId: text("organisation_id").references(() => organisations.id, { onDelete: "set null" }),
+  },
+  (table) => [index("sessions_user_idx").on(table.userId)],
+);
+
+export const memberships = sqliteTable(
+  "memberships",
+  {
+    id: text("id").primaryKey(),
+    organisationId: text("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    userId: text("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    role: text("role", { enum: ROLES }).notNull(),
+    createdAt: timestampNow(),
+  },
+  (table) => [
+    uniqueIndex("memberships_org_user_idx").on(table.organisationId, table.userId),
+    index("memberships_user_idx").on(table.userId),
+  ],
+);
+
+export const invitations = sqliteTable(
+  "invitations",
+  {
+    id: text("id").primaryKey(),
+    organisationId: text("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    email: text("email").notNull(),
+    role: text("role", { enum: ROLES }).notNull(),
+    /** SHA-256 of the token in the link; the token itself is never stored. */
+    tokenHash: text("token_hash").notNull().unique(),
+    invitedByUserId: text("invited_by_user_id").references(() => users.id, { onDelete: "set null" }),
+    expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+    acceptedAt: integer("accepted_at", { mode: "timestamp_ms" }),
+    revokedAt: integer("revoked_at", { mode: "timestamp_ms" }),
+    createdAt: timestampNow(),
+  },
+  (table) => [index("invitations_org_idx").on(table.organisationId)],
+);
+
+export const passwordResets = sqliteTable("password_resets", {
+  tokenHash: text("token_hash").primaryKey(),
+  userId: text("user_id")
+    .notNull()
+    .references(() => users.id, { onDelete: "cascade" }),
+  expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+  usedAt: integer("used_at", { mode: "timestamp_ms" }),
+  createdAt: timestampNow(),
+});
+
+/**
+ * A sign-up waiting for its address to be confirmed. The account and its organisation are made only when the
+ * link in the mail is opened, so sign-up answers the same whether or not the address already has an account.
+ */
+export const signupRequests = sqliteTable("signup_requests", {
+  tokenHash: text("token_hash").primaryKey(),
+  email: text("email").notNull(),
+  name: text("name").notNull(),
+  passwordHash: text("password_hash").notNull(),
+  organisationName: text("organisation_name").notNull(),
+  organisationKind: text("organisation_kind", { enum: ["shop", "fleet"] }).notNull(),
+  expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+  usedAt: integer("used_at", { mode: "timestamp_ms" }),
+  createdAt: timestampNow(),
+});
+
+/** Mail kept by the local fake SMTP server (demo, development, tests). Never used in production. */
+export const capturedMail = sqliteTable("captured_mail", {
+  id: integer("id").primaryKey({ autoIncrement: true }),
+  envelopeFrom: text("envelope_from").notNull(),
+  envelopeTo: text("envelope_to").notNull(),
+  subject: text("subject").notNull(),
+  text: text("text").notNull(),
+  html: text("html"),
+  receivedAt: timestampNow("received_at"),
+});
+
+export type User = typeof users.$inferSelect;
+export type Organisation = typeof organisations.$inferSelect;
+export type Membership = typeof memberships.$inferSelect;
+export type Invitation = typeof invitations.$inferSelect;

@@ -1,0 +1,44 @@
+import { eq } from "drizzle-orm";
+import { randomBytes } from "node:crypto";
+import { hashPassword } from "../lib/auth/password-hash";
+import type { Role } from "../lib/roles";
+import { getDb } from "./client";
+import { memberships, organisations, users } from "./schema";
+
+/**
+ * The demo's invented scenario: Quillfield Hitch & Trailer, a hitch shop, and Fernhollow Grounds, a
+ * landscaping fleet that buys its hitches there. Every name and address is made up (example.com).
+ */
+export const DEMO_PASSWORD = "towmargin-demo";
+
+export const DEMO_ORGANISATIONS = [
+  { id: "org-quillfield", name: "Quillfield Hitch & Trailer", kind: "shop", units: "imperial" },
+  { id: "org-fernhollow", name: "Fernhollow Grounds", kind: "fleet", units: "imperial" },
+] as const;
+
+export const DEMO_PEOPLE: ReadonlyArray<{ email: string; name: string; organisationId: string; role: Role }> = [
+  { email: "owner@quillfield.example.com", name: "Ines Harrowgate", organisationId: "org-quillfield", role: "owner" },
+  { email: "counter@quillfield.example.com", name: "Rowan Teague", organisationId: "org-quillfield", role: "staff" },
+  { email: "counter2@quillfield.example.com", name: "Sami Lindqvell", organisationId: "org-quillfield", role: "staff" },
+  { email: "trainer@quillfield.example.com", name: "Beatrix Mollander", organisationId: "org-quillfield", role: "trainer" },
+  { email: "fleet@fernhollow.example.com", name: "Caspian Nwokedi", organisationId: "org-fernhollow", role: "fleet_manager" },
+];
+
+const newId = () => randomBytes(15).toString("base64url");
+
+/** Adds the demo organisations and people once; running it again changes nothing. */
+export async function seedDemo(): Promise<{ created: boolean }> {
+  const db = await getDb();
+  const existing = await db.select({ id: organisations.id }).from(organisations).where(eq(organisations.id, DEMO_ORGANISATIONS[0].id)).get();
+  if (existing) return { created: false };
+  const passwordHash = await hashPassword(DEMO_PASSWORD);
+  await db.transaction(async (tx) => {
+    for (const organisation of DEMO_ORGANISATIONS) await tx.insert(organisations).values({ ...organisation });
+    for (const person of DEMO_PEOPLE) {
+      const userId = newId();
+      await tx.insert(users).values({ id: userId, email: person.email, name: person.name, passwordHash });
+      await tx.insert(memberships).values({ id: newId(), userId, organisationId: person.organisationId, role: person.role });
+    }
+  });
+  return { created: true };
+}

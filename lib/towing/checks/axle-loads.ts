@@ -1,0 +1,153 @@
+/**
+ * Check 6, axle loads. Physics: statics, moments about the rear axle. A load P hung OH behind the rear axle of
+ * a vehicle with wheelbase WB lifts P·OH/WB off the front axle and puts P·(WB + OH)/WB on the rear axle.
+ * Each axle is compared with its GAWR; the front axle with the larger of its unhitched and hitched loads.
+ */
+import { fP, fW, govW, iL, iW, marginW, NO_STEPS, NO_TEXT, qW, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
+import type { Derived } from "../derive";
+import { need } from "../missing";
+import type { AxleLoadsResult, CheckStatus, MissingField, Step } from "../types";
+import { axlesWithWd, wdState } from "./weight-distribution";
+
+/** Change of each axle's load for a load `p` at `overhang` behind the rear axle. Physics: statics. */
+export function axleLoadChange(p: number, wheelbase: number, overhang: number) {
+  return { front: (-p * overhang) / wheelbase, rear: (p * (wheelbase + overhang)) / wheelbase };
+}
+
+const CAUTIONS = [
+  "Weight on the hitch lifts the front of the vehicle: the front tyres steer and brake with less grip.",
+  "Cargo placed behind the rear axle adds to the rear axle even more than its own weight.",
+];
+
+export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
+  if (!d.hasTrailer && !d.hasAccessory) return null;
+  const { rig } = d;
+  const v = rig.vehicle;
+  const missing: MissingField[] = [];
+  const p = d.hitchLoad;
+  if (p === undefined) missing.push(need(d.hasTrailer ? "trailer.tongueWeight" : "accessory.weight"));
+  if (v.wheelbase === undefined) missing.push(need("vehicle.wheelbase"));
+  if (v.rearAxleToHitch === undefined) missing.push(need("vehicle.rearAxleToHitch"));
+  if (d.hasAccessory && rig.accessory!.loadCenterFromPin === undefined) missing.push(need("accessory.loadCenterFromPin"));
+  if (!v.axleWeights) missing.push(need("vehicle.axleWeights"));
+  if (v.gawrFront === undefined) missing.push(need("vehicle.gawrFront"));
+  if (v.gawrRear === undefined) missing.push(need("vehicle.gawrRear"));
+  const result: AxleLoadsResult = {
+    id: "axle-loads",
+    title: "Axle loads",
+    status: "incomplete",
+    message: "",
+    advice: NO_TEXT,
+    cautions: NO_TEXT,
+    estimated: d.twEstimated || undefined,
+    steps: NO_STEPS,
+  };
+  const steps: Step[] = [];
+  const sym = d.hasAccessory ? "W_acc" : "TW";
+  const label = d.hasAccessory ? "Accessory and its load" : "Tongue weight";
+  let change: { front: number; rear: number } | undefined;
+  if (p !== undefined && v.wheelbase !== undefined && d.overhang !== undefined) {
+    change = axleLoadChange(p, v.wheelbase, d.overhang);
+    result.frontChange = qW(c, change.front);
+    result.rearChange = qW(c, change.rear);
+    if (c.detail) {
+      const ohLabel = d.hasAccessory ? "Rear axle to the load's centre" : "Rear axle to ball";
+      steps.push(
+        {
+          id: "front-change",
+          title: "Load lifted off the front axle",
+          formulaWords: "Hitch load times overhang divided by wheelbase, taken off the front",
+          formula: `-${sym} * OH / WB`,
+          inputs: [iW(c, sym, label, p), iL(c, "OH", ohLabel, d.overhang), iL(c, "WB", "Wheelbase", v.wheelbase)],
+          result: rW(c, "dF", change.front),
+        },
+        {
+          id: "rear-change",
+          title: "Load added to the rear axle",
+          formulaWords: "Hitch load times (wheelbase plus overhang) divided by wheelbase",
+          formula: `${sym} * (WB + OH) / WB`,
+          inputs: [iW(c, sym, label, p), iL(c, "OH", ohLabel, d.overhang), iL(c, "WB", "Wheelbase", v.wheelbase)],
+          result: rW(c, "dR", change.rear),
+        },
+      );
+    }
+  }
+  const aw = v.axleWeights;
+  const awh = d.hasTrailer ? v.axleWeightsHitched : undefined;
+  const statuses: CheckStatus[] = [];
+  if (aw) {
+    result.unhitched = { front: qW(c, aw.front), rear: qW(c, aw.rear) };
+    let front: number | undefined;
+    let rear: number | undefined;
+    if (awh) {
+      front = awh.front;
+      rear = awh.rear;
+    } else if (change) {
+      front = aw.front + change.front;
+      rear = aw.rear + change.rear;
+    }
+    if (front !== undefined && rear !== undefined) {
+      result.hitched = { front: qW(c, front), rear: qW(c, rear) };
+      if (c.detail && !awh && change)
+        steps.push(
+          { id: "front-hitched", title: "Front axle, hitched", formulaWords: "Unhitched front load plus its change", formula: "F_0 + dF", inputs: [iW(c, "F_0", "Front axle unhitched", aw.front), iW(c, "dF", "Change on the front", change.front)], result: rW(c, "F_h", front) },
+          { id: "rear-hitched", title: "Rear axle, hitched", formulaWords: "Unhitched rear load plus its change", formula: "R_0 + dR", inputs: [iW(c, "R_0", "Rear axle unhitched", aw.rear), iW(c, "dR", "Change on the rear", change.rear)], result: rW(c, "R_h", rear) },
+        );
+      let frontDriven = front;
+      let rearDriven = rear;
+      if (d.wdUsed && p !== undefined && v.wheelbase !== undefined && d.overhang !== undefined) {
+        const s = wdState(d);
+        const w = axlesWithWd(aw.front, aw.rear, p, v.wheelbase, d.overhang, s.restorationUsed ?? s.target);
+        result.withWd = { front: qW(c, w.front), rear: qW(c, w.rear) };
+        frontDriven = w.front;
+        rearDriven = w.rear;
+      }
+      // The vehicle also drives unhitched, so the front axle answers for the larger of the two.
+      const frontWorst = Math.max(aw.front, front, frontDriven);
+      let bestRatio = Infinity;
+      const axles: Array<[string, string, number, number | undefined]> = [
+        ["vehicle.gawrRear", "Rear GAWR", rearDriven, v.gawrRear],
+        ["vehicle.gawrFront", "Front GAWR", frontWorst, v.gawrFront],
+      ];
+      for (const [id, lab, actual, limit] of axles) {
+        if (limit === undefined) continue;
+        statuses.push(statusOf(actual, limit, c.tight));
+        const ratio = ratioOf(actual, limit);
+        if (ratio < bestRatio) {
+          bestRatio = ratio;
+          result.actual = qW(c, actual);
+          result.limit = qW(c, limit);
+          result.margin = marginW(c, actual, limit);
+          result.governing = govW(c, id, lab, limit);
+        }
+      }
+    }
+  }
+  result.status = withMissing(worst(statuses), missing);
+  if (missing.length) result.missing = missing;
+  if (!c.detail) return result;
+  result.steps = steps;
+  const cautions = CAUTIONS.slice();
+  if (change && aw && aw.front > 0)
+    cautions.push(`Hitched, the front axle carries ${fW(c, -change.front)} (${fP(-change.front / aw.front)}) less than unhitched.`);
+  if (d.wdUsed) cautions.push("The axle loads compared with the GAWRs are those with weight distribution engaged, as driven.");
+  result.cautions = cautions;
+  const advice: string[] = [];
+  if (result.status === "over" && result.governing?.id === "vehicle.gawrRear")
+    advice.push("Lighten the tongue, move cargo forward in the vehicle, or use weight distribution to move load off the rear axle.");
+  if (result.status === "over" && result.governing?.id === "vehicle.gawrFront") advice.push("Move cargo off the front of the vehicle or back towards the rear axle.");
+  if (result.status === "tight") advice.push("An axle is close to its rating: weigh each axle at a public scale, hitched.");
+  for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
+  result.advice = advice;
+  const g = result.governing;
+  result.message =
+    g && result.actual && result.limit
+      ? result.status === "over"
+        ? `${g.label === "Rear GAWR" ? "The rear axle" : "The front axle"} carries ${fW(c, result.actual.value / c.u.weightFactor)}, over its ${g.label} of ${fW(c, g.value / c.u.weightFactor)}.`
+        : `${g.label === "Rear GAWR" ? "The rear axle" : "The front axle"} is the closer to its rating: ${fW(c, result.actual.value / c.u.weightFactor)} of ${fW(c, g.value / c.u.weightFactor)}.` +
+          (result.status === "incomplete" ? " Some figures are missing." : "")
+      : change
+        ? `The hitch load adds ${fW(c, change.rear)} to the rear axle and lifts ${fW(c, -change.front)} off the front; weigh the axles to compare with the GAWRs.`
+        : "Enter the wheelbase, the overhang and the hitch load to work out the axle loads.";
+  return result;
+}

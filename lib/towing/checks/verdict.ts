@@ -1,0 +1,68 @@
+/**
+ * Check 10, the verdict of the rig from its checks.
+ * - levelFromCheckedOnly: the worst status among checks that have their data (over > tight > within).
+ * - level: the same, raised to at least "tight" when any check is incomplete, so a rig never reads "within"
+ *   only because data is missing. `complete` and `incomplete` say which checks lack data.
+ */
+import { fP, NO_TEXT, type Ctx } from "../context";
+import type { AnyCheckResult, CheckId, Governing, VerdictAction, VerdictLevel, VerdictResult } from "../types";
+
+/** Cautions every verdict carries. */
+export const GENERAL_CAUTIONS = [
+  "The ratings come from the vehicle maker and the labels on each part; these results are only as good as the figures entered.",
+  "The lowest rating of any part is the limit for the whole rig.",
+  "Weigh the loaded rig at a public scale: estimates and brochure figures are not weights.",
+  "Follow each maker's fitting instructions and torque values.",
+  "Local law and a licensed installer have the last word.",
+];
+
+export function buildVerdict(checks: AnyCheckResult[], c: Ctx): VerdictResult {
+  let checked: VerdictLevel = "within";
+  const incomplete: CheckId[] = [];
+  let best = Infinity;
+  let governing: (Governing & { checkId: CheckId }) | undefined;
+  for (const ch of checks) {
+    if (ch.status === "incomplete") incomplete.push(ch.id);
+    else if (ch.status === "over") checked = "over";
+    else if (ch.status === "tight" && checked === "within") checked = "tight";
+    if (ch.governing && ch.margin && ch.status !== "incomplete" && ch.margin.ratio < best) {
+      best = ch.margin.ratio;
+      governing = { ...ch.governing, checkId: ch.id };
+    }
+  }
+  const complete = incomplete.length === 0;
+  const level: VerdictLevel = checked === "within" && !complete ? "tight" : checked;
+  const verdict: VerdictResult = {
+    id: "verdict",
+    title: "Verdict",
+    level,
+    levelFromCheckedOnly: checked,
+    complete,
+    incomplete,
+    governing,
+    message: "",
+    actions: [],
+    cautions: NO_TEXT,
+    tightMarginRatio: c.tight,
+  };
+  if (!c.detail) return verdict;
+  const actions: VerdictAction[] = [];
+  for (const ch of checks) if (ch.status !== "within" && ch.advice.length) actions.push({ checkId: ch.id, status: ch.status, advice: ch.advice });
+  // Problems first, then tight items, then the data still to collect.
+  const order = { over: 0, tight: 1, incomplete: 2, within: 3 } as const;
+  actions.sort((a, b) => order[a.status] - order[b.status]);
+  verdict.actions = actions;
+  verdict.cautions = GENERAL_CAUTIONS;
+  const overs = checks.filter((ch) => ch.status === "over");
+  const tights = checks.filter((ch) => ch.status === "tight");
+  const first = overs[0] ?? tights[0];
+  verdict.message =
+    checked === "over"
+      ? `Over: ${first!.message}`
+      : checked === "tight"
+        ? `Tight: ${first!.message}` + (complete ? "" : ` ${incomplete.length} check${incomplete.length > 1 ? "s" : ""} still lack data.`)
+        : complete
+          ? `Within: every check passes with at least ${fP(c.tight)} to spare.`
+          : `Not confirmed: the checks with data pass, but ${incomplete.length} still lack data.`;
+  return verdict;
+}

@@ -1,0 +1,247 @@
+/**
+ * Check 1, weakest link: the gross trailer weight and the tongue weight against every rating present.
+ * The lowest rating of each kind governs (Source: Washington WAC 204-70-060; vehicle owner's manuals).
+ */
+import {
+  fP,
+  fW,
+  govW,
+  iW,
+  marginW,
+  NO_STEPS,
+  NO_TEXT,
+  qW,
+  rW,
+  statusOf,
+  withMissing,
+  worst,
+  type Ctx,
+} from "../context";
+import type { Derived } from "../derive";
+import { need } from "../missing";
+import type { CheckStatus, Governing, Link, MissingField, Step, WeakestLinkResult } from "../types";
+
+export interface RatingEntry {
+  id: string;
+  label: string;
+  symbol: string;
+  rating: number;
+  note?: string;
+}
+
+export interface RatingSet {
+  gtw: RatingEntry[];
+  tw: RatingEntry[];
+  missing: MissingField[];
+  /** Optional links that could not be checked (no figure entered). */
+  unchecked: string[];
+}
+
+/** Maximum gross trailer weight by hitch class. Source: New York 15 NYCRR 57.3(c) (adopts SAE J684). */
+export const CLASS_MAX_GTW: Record<number, number> = { 1: 2000, 2: 3500, 3: 5000, 4: 10000 };
+
+/** Every rating that limits this rig's trailer, in canonical pounds, with what is missing. */
+export function ratingSet(d: Derived): RatingSet {
+  const { rig, wdUsed } = d;
+  const v = rig.vehicle;
+  const h = rig.hitch;
+  const t = rig.trailer;
+  const gtw: RatingEntry[] = [];
+  const tw: RatingEntry[] = [];
+  const missing: MissingField[] = [];
+  const unchecked: string[] = [];
+  const fallback = "Weight-carrying figure used: no figure with weight distribution was entered, and it is the lower one.";
+
+  // Vehicle
+  if (wdUsed && v.towRatingWd !== undefined)
+    gtw.push({ id: "vehicle.towRatingWd", label: "Vehicle tow rating with weight distribution", symbol: "R_veh", rating: v.towRatingWd });
+  else if (v.towRating !== undefined)
+    gtw.push({ id: "vehicle.towRating", label: "Vehicle tow rating", symbol: "R_veh", rating: v.towRating, note: wdUsed ? fallback : undefined });
+  else missing.push(need(wdUsed ? "vehicle.towRatingWd" : "vehicle.towRating"));
+  if (wdUsed && v.tongueWeightLimitWd !== undefined)
+    tw.push({ id: "vehicle.tongueWeightLimitWd", label: "Vehicle tongue-weight limit with weight distribution", symbol: "T_veh", rating: v.tongueWeightLimitWd });
+  else if (v.tongueWeightLimit !== undefined)
+    tw.push({ id: "vehicle.tongueWeightLimit", label: "Vehicle tongue-weight limit", symbol: "T_veh", rating: v.tongueWeightLimit, note: wdUsed ? fallback : undefined });
+  else missing.push(need(wdUsed ? "vehicle.tongueWeightLimitWd" : "vehicle.tongueWeightLimit"));
+
+  // Hitch (receiver)
+  if (wdUsed && h?.gtwRatingWd !== undefined)
+    gtw.push({ id: "hitch.gtwRatingWd", label: "Hitch rating with weight distribution", symbol: "R_hitch", rating: h.gtwRatingWd });
+  else if (h?.gtwRating !== undefined)
+    gtw.push({ id: "hitch.gtwRating", label: "Hitch rating", symbol: "R_hitch", rating: h.gtwRating, note: wdUsed ? fallback : undefined });
+  else missing.push(need(wdUsed ? "hitch.gtwRatingWd" : "hitch.gtwRating"));
+  if (wdUsed && h?.twRatingWd !== undefined)
+    tw.push({ id: "hitch.twRatingWd", label: "Hitch tongue rating with weight distribution", symbol: "T_hitch", rating: h.twRatingWd });
+  else if (h?.twRating !== undefined)
+    tw.push({ id: "hitch.twRating", label: "Hitch tongue rating", symbol: "T_hitch", rating: h.twRating, note: wdUsed ? fallback : undefined });
+  else missing.push(need(wdUsed ? "hitch.twRatingWd" : "hitch.twRating"));
+
+  // Ball: every ball is stamped, so it is required.
+  if (t?.ballRating !== undefined) gtw.push({ id: "trailer.ballRating", label: "Ball rating", symbol: "R_ball", rating: t.ballRating });
+  else if (t) missing.push(need("trailer.ballRating"));
+
+  // Optional links: checked when entered.
+  const bm = rig.ballMount;
+  if (bm?.gtwRating !== undefined) gtw.push({ id: "ballMount.gtwRating", label: "Ball mount rating", symbol: "R_mount", rating: bm.gtwRating });
+  else if (t && !wdUsed) unchecked.push("ball mount rating (stamped on the ball mount)");
+  if (bm?.twRating !== undefined) tw.push({ id: "ballMount.twRating", label: "Ball mount tongue rating", symbol: "T_mount", rating: bm.twRating });
+  if (t?.couplerRating !== undefined) gtw.push({ id: "trailer.couplerRating", label: "Coupler rating", symbol: "R_coupler", rating: t.couplerRating });
+  else if (t) unchecked.push("coupler rating (stamped on the coupler)");
+  // Source: Washington WAC 204-70-070; New Hampshire RSA 266:63 (each chain at least the gross trailer weight)
+  if (t?.safetyChainRating !== undefined)
+    gtw.push({ id: "trailer.safetyChainRating", label: "Safety chain rating (each chain)", symbol: "R_chain", rating: t.safetyChainRating });
+  else if (t) unchecked.push("safety chain rating (tag on each chain)");
+  if (wdUsed) {
+    const wdr = rig.weightDistribution?.tongueRating;
+    if (wdr !== undefined) tw.push({ id: "weightDistribution.tongueRating", label: "Weight distribution rating", symbol: "T_wd", rating: wdr });
+    else unchecked.push("weight distribution rating (label on the spring bars)");
+  }
+  if (rig.extender?.twRating !== undefined)
+    tw.push({ id: "extender.twRating", label: "Extender tongue rating", symbol: "T_ext", rating: rig.extender.twRating });
+
+  return { gtw, tw, missing, unchecked };
+}
+
+function lowest(entries: RatingEntry[]): RatingEntry | undefined {
+  let low: RatingEntry | undefined;
+  for (const e of entries) if (!low || e.rating < low.rating) low = e;
+  return low;
+}
+
+const CAUTIONS = [
+  "Every part between the vehicle and the trailer has its own rating; the lowest one is the limit for the whole rig.",
+  "Read the figures from the labels and stamps on the parts themselves; a catalogue figure may differ.",
+  "Use two safety chains crossed under the tongue, hooked to the hitch, never to the ball or a removable ball mount.",
+];
+
+export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
+  if (!d.hasTrailer) return null;
+  const t = d.rig.trailer!;
+  const set = ratingSet(d);
+  const missing = set.missing.slice();
+  if (d.gtw === undefined) missing.unshift(need("trailer.grossTrailerWeight"));
+  if (d.tw === undefined) missing.unshift(need("trailer.tongueWeight"));
+
+  const links: Link[] = [];
+  const statuses: CheckStatus[] = [];
+  let bestRatio = Infinity;
+  let governing: Governing | undefined;
+  let govActual = 0;
+  let govLimit = 0;
+  const addLinks = (entries: RatingEntry[], actual: number | undefined, kind: Link["limits"]) => {
+    for (const e of entries) {
+      const link: Link = { id: e.id, label: e.label, limits: kind, rating: qW(c, e.rating), status: "incomplete" };
+      if (actual !== undefined) {
+        link.actual = qW(c, actual);
+        link.margin = marginW(c, actual, e.rating);
+        link.status = statusOf(actual, e.rating, c.tight);
+        statuses.push(link.status);
+        if (link.margin.ratio < bestRatio) {
+          bestRatio = link.margin.ratio;
+          governing = govW(c, e.id, e.label, e.rating);
+          govActual = actual;
+          govLimit = e.rating;
+        }
+      }
+      links.push(link);
+    }
+  };
+  addLinks(set.gtw, d.gtw, "gross-trailer-weight");
+  addLinks(set.tw, d.tw, "tongue-weight");
+
+  // Ball and coupler must be the same size: a mismatch can let the trailer come off.
+  const sizeMismatch = t.ballSize !== undefined && t.couplerBallSize !== undefined && t.ballSize !== t.couplerBallSize;
+  if (sizeMismatch) statuses.push("over");
+
+  const lowG = lowest(set.gtw);
+  const lowT = lowest(set.tw);
+  const status = withMissing(worst(statuses), missing);
+  const result: WeakestLinkResult = {
+    id: "weakest-link",
+    title: "Weakest link",
+    status,
+    links,
+    governing,
+    governingGrossTrailerWeight: lowG ? govW(c, lowG.id, lowG.label, lowG.rating) : undefined,
+    governingTongueWeight: lowT ? govW(c, lowT.id, lowT.label, lowT.rating) : undefined,
+    message: "",
+    advice: NO_TEXT,
+    cautions: NO_TEXT,
+    missing: missing.length ? missing : undefined,
+    estimated: d.twEstimated || undefined,
+    steps: NO_STEPS,
+  };
+  if (governing) {
+    result.actual = qW(c, govActual);
+    result.limit = qW(c, govLimit);
+    result.margin = marginW(c, govActual, govLimit);
+  }
+  if (!c.detail) return result;
+
+  const steps: Step[] = [];
+  const kinds: Array<[RatingEntry[], number | undefined, string, string, string]> = [
+    [set.gtw, d.gtw, "gtw", "gross trailer weight", "GTW"],
+    [set.tw, d.tw, "tw", "tongue weight", "TW"],
+  ];
+  for (const [entries, actual, key, words, sym] of kinds) {
+    const low = lowest(entries);
+    if (!low) continue;
+    steps.push({
+      id: `lowest-${key}-rating`,
+      title: `Lowest ${words} rating`,
+      formulaWords: `The smallest of the ${words} ratings present`,
+      formula: entries.length > 1 ? `min(${entries.map((e) => e.symbol).join(", ")})` : entries[0]!.symbol,
+      inputs: entries.map((e) => iW(c, e.symbol, e.label, e.rating)),
+      result: rW(c, `${sym}_max`, low.rating),
+      note: entries.find((e) => e.note)?.note,
+    });
+    if (actual !== undefined)
+      steps.push({
+        id: `${key}-margin`,
+        title: `Room left on the ${words}`,
+        formulaWords: `Lowest rating minus the trailer's ${words}`,
+        formula: `${sym}_max - ${sym}`,
+        inputs: [iW(c, `${sym}_max`, `Lowest ${words} rating`, low.rating), iW(c, sym, words[0]!.toUpperCase() + words.slice(1), actual)],
+        result: rW(c, `M_${sym}`, low.rating - actual),
+        note: sym === "TW" && d.twEstimated ? "The tongue weight is an estimate." : undefined,
+      });
+  }
+  result.steps = steps;
+
+  const advice: string[] = [];
+  const cautions = CAUTIONS.slice();
+  if (sizeMismatch) {
+    advice.push(`Fit a ${t.couplerBallSize} in ball to match the coupler; the ${t.ballSize} in ball does not fit it safely.`);
+  }
+  for (const l of links) {
+    if (l.status === "over")
+      advice.push(
+        `${l.label} is exceeded: lighten the trailer or fit a part rated for at least ${fW(c, (l.limits === "tongue-weight" ? d.tw : d.gtw) ?? 0)}.`,
+      );
+  }
+  if (status === "tight") advice.push("Little room is left: weigh the loaded trailer before each trip and load no more.");
+  for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
+  if (set.unchecked.length) cautions.push(`Not checked because no figure was entered: ${set.unchecked.join("; ")}.`);
+  if (d.twEstimated) cautions.push("The tongue weight is an estimate; weigh it to be sure.");
+  const cls = d.rig.hitch?.class;
+  const classMax = cls !== undefined ? CLASS_MAX_GTW[cls] : undefined;
+  if (classMax !== undefined && d.gtw !== undefined && d.gtw > classMax)
+    cautions.push(`A class ${cls} hitch covers trailers up to ${fW(c, classMax)} (SAE J684); this trailer is heavier. The hitch label governs.`);
+  result.advice = advice;
+  result.cautions = cautions;
+
+  if (sizeMismatch) result.message = "The ball and the coupler are different sizes.";
+  else if (!governing) result.message = "Enter the trailer's weights and the ratings to find the weakest link.";
+  else {
+    const g = governing as Governing;
+    const isTw = set.tw.some((e) => e.id === g.id);
+    const actual = isTw ? d.tw! : d.gtw!;
+    const m = govLimit - actual;
+    result.message =
+      status === "over"
+        ? `${g.label} is the weakest link: ${fW(c, govLimit)} allowed, ${fW(c, actual)} on it.`
+        : `${g.label} is the weakest link, with ${fW(c, m)} (${fP(m / (govLimit || 1))}) to spare.` +
+          (status === "incomplete" ? " Some ratings are still missing." : "");
+  }
+  return result;
+}

@@ -1,0 +1,246 @@
+/**
+ * Check 7, weight distribution: front axle load restoration from fender heights, by the SAE J2807 method as
+ * owner's manuals give it (Source: Ram owner's manuals (2015, 2018, 2023), citing SAE J2807):
+ *   target height H3 = H1 + (H2 − H1) × (1 − target), restoration = (H2 − H3) ÷ (H2 − H1).
+ * Also: axle loads with WD, and whether WD is required (the vehicle's threshold, or the weight-carrying
+ * ratings exceeded) or advisable (the weight-carrying ratings are tight).
+ */
+import { EPS, fL, fP, fW, iL, iN, iW, lessOrEqual, NO_STEPS, NO_TEXT, qL, qP, qW, rL, rN, rW, statusOf, type Ctx } from "../context";
+import type { Derived } from "../derive";
+import { need } from "../missing";
+import type { AxleLoads, CheckStatus, MissingField, Step, WeightDistributionResult } from "../types";
+
+/** The usual target. Source: Ram owner's manuals (2015, 2018, 2023), citing SAE J2807. */
+export const DEFAULT_RESTORATION_TARGET = 0.5;
+
+export interface WdState {
+  target: number;
+  restoration?: number;
+  /** Restoration used for axle loads: measured, else the target. */
+  restorationUsed?: number;
+  restorationIsTarget: boolean;
+  targetFenderHeight?: number;
+}
+
+export function wdState(d: Derived): WdState {
+  const wd = d.rig.weightDistribution;
+  const target = wd?.restorationTarget !== undefined ? wd.restorationTarget / 100 : DEFAULT_RESTORATION_TARGET;
+  const s: WdState = { target, restorationIsTarget: false };
+  if (!wd) return s;
+  const { fenderUnhitched: h1, fenderHitched: h2, fenderWithWd: h3 } = wd;
+  if (h1 !== undefined && h2 !== undefined) {
+    s.targetFenderHeight = h1 + (h2 - h1) * (1 - target);
+    if (h3 !== undefined && h2 - h1 > EPS * Math.max(1, h2)) s.restoration = (h2 - h3) / (h2 - h1);
+  }
+  if (s.restoration !== undefined) s.restorationUsed = s.restoration;
+  else {
+    s.restorationUsed = target;
+    s.restorationIsTarget = true;
+  }
+  return s;
+}
+
+/**
+ * Axle loads with WD. Physics: statics, WD modelled as a couple at the hitch that gives back R × L to the front
+ * axle and takes it off the rear (L = front axle's lost load). The share moved to the trailer's axles is
+ * neglected, which over-states the vehicle's loads (the safe side).
+ */
+export function axlesWithWd(front0: number, rear0: number, tw: number, wheelbase: number, overhang: number, r: number) {
+  const lost = (tw * overhang) / wheelbase;
+  return { front: front0 - lost + r * lost, rear: rear0 + tw + lost - r * lost, lost };
+}
+
+const CAUTIONS = [
+  "Weigh the tongue and read the ball's rating with weight distribution released.",
+  "Measure fender heights at the same point above the front wheel centre, on level ground, each time.",
+  "Restoring more than all of the front axle's lost load puts too much on the front and takes it off the rear wheels.",
+  "Some vehicles ask for another target (for example a truck with air suspension): follow the vehicle maker's instructions.",
+];
+
+export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionResult | null {
+  if (!d.hasTrailer) return null;
+  const { rig, gtw, tw } = d;
+  const v = rig.vehicle;
+  const h = rig.hitch;
+  const wd = rig.weightDistribution;
+  const s = wdState(d);
+  const missing: MissingField[] = [];
+  const steps: Step[] = [];
+
+  // Required or advisable, from the weight-carrying figures.
+  const wcGtw: Array<[string, string, number]> = [];
+  if (v.wdRequiredAbove !== undefined) wcGtw.push(["vehicle.wdRequiredAbove", "Weight distribution required above", v.wdRequiredAbove]);
+  if (v.towRating !== undefined) wcGtw.push(["vehicle.towRating", "Vehicle tow rating without weight distribution", v.towRating]);
+  if (h?.gtwRating !== undefined) wcGtw.push(["hitch.gtwRating", "Hitch rating without weight distribution", h.gtwRating]);
+  const wcTw: Array<[string, string, number]> = [];
+  if (v.tongueWeightLimit !== undefined) wcTw.push(["vehicle.tongueWeightLimit", "Vehicle tongue-weight limit without weight distribution", v.tongueWeightLimit]);
+  if (h?.twRating !== undefined) wcTw.push(["hitch.twRating", "Hitch tongue rating without weight distribution", h.twRating]);
+  let required = false;
+  let advisable = false;
+  let worstRatio = Infinity;
+  let gov: [string, string, number] | undefined;
+  let govActual = 0;
+  const consider = (list: Array<[string, string, number]>, actual: number | undefined) => {
+    if (actual === undefined) return;
+    for (const item of list) {
+      const st = statusOf(actual, item[2], c.tight);
+      if (st === "over") required = true;
+      if (st === "tight") advisable = true;
+      const ratio = item[2] > 0 ? (item[2] - actual) / item[2] : -1;
+      if (ratio < worstRatio) {
+        worstRatio = ratio;
+        gov = item;
+        govActual = actual;
+      }
+    }
+  };
+  consider(wcGtw, gtw);
+  consider(wcTw, tw);
+
+  const result: WeightDistributionResult = {
+    id: "weight-distribution",
+    title: "Weight distribution",
+    status: "incomplete",
+    target: s.target,
+    required,
+    advisable: advisable && !required,
+    message: "",
+    advice: NO_TEXT,
+    cautions: NO_TEXT,
+    steps: NO_STEPS,
+  };
+  if (s.targetFenderHeight !== undefined) result.targetFenderHeight = qL(c, s.targetFenderHeight);
+
+  let status: CheckStatus;
+  if (!d.wdUsed) {
+    if (gtw === undefined) missing.push(need("trailer.grossTrailerWeight"));
+    if (tw === undefined) missing.push(need("trailer.tongueWeight"));
+    if (!wcGtw.length) missing.push(need("vehicle.towRating"));
+    if (!wcTw.length) missing.push(need("vehicle.tongueWeightLimit"));
+    status = required ? "over" : missing.length ? "incomplete" : advisable ? "tight" : "within";
+    if (gov) {
+      result.actual = qW(c, govActual);
+      result.limit = qW(c, gov[2]);
+      result.margin = { value: (gov[2] - govActual) * c.u.weightFactor, unit: c.u.weight, ratio: worstRatio };
+      result.governing = { id: gov[0], label: gov[1], value: gov[2] * c.u.weightFactor, unit: c.u.weight };
+    }
+  } else {
+    if (wd?.fenderUnhitched === undefined) missing.push(need("weightDistribution.fenderUnhitched"));
+    if (wd?.fenderHitched === undefined) missing.push(need("weightDistribution.fenderHitched"));
+    if (wd?.fenderWithWd === undefined) missing.push(need("weightDistribution.fenderWithWd"));
+    const r = s.restoration;
+    if (r === undefined) {
+      if (!missing.length) missing.push(need("weightDistribution.fenderHitched"));
+      status = "incomplete";
+    } else {
+      result.restoration = r;
+      result.actual = qP(r);
+      if (!lessOrEqual(r, 1)) {
+        status = "over";
+        result.limit = qP(1);
+        result.margin = { value: (1 - r) * 100, unit: "%", ratio: 1 - r };
+        result.governing = { id: "restoration.max", label: "All of the lost load (100 %)", value: 100, unit: "%" };
+      } else if (r < s.target * (1 - EPS)) {
+        const shortfall = (s.target - r) / s.target;
+        status = shortfall <= c.tight + EPS ? "tight" : "over";
+        result.limit = qP(s.target);
+        result.margin = { value: (r - s.target) * 100, unit: "%", ratio: -shortfall };
+        result.governing = { id: "weightDistribution.restorationTarget", label: "Restoration target", value: s.target * 100, unit: "%" };
+      } else {
+        status = 1 - r < c.tight - EPS ? "tight" : "within";
+        result.limit = qP(1);
+        result.margin = { value: (1 - r) * 100, unit: "%", ratio: 1 - r };
+        result.governing = { id: "restoration.max", label: "All of the lost load (100 %)", value: 100, unit: "%" };
+      }
+    }
+  }
+  result.status = status;
+
+  // Axle loads with WD engaged.
+  const aw = v.axleWeights;
+  if (d.wdUsed && aw && tw !== undefined && v.wheelbase !== undefined && d.overhang !== undefined && s.restorationUsed !== undefined) {
+    const w = axlesWithWd(aw.front, aw.rear, tw, v.wheelbase, d.overhang, s.restorationUsed);
+    const withWd: AxleLoads = { front: qW(c, w.front), rear: qW(c, w.rear) };
+    result.withWd = withWd;
+    if (c.detail) {
+      steps.push({
+        id: "wd-front",
+        title: "Front axle with weight distribution",
+        formulaWords: "Unhitched front load, minus the load the tongue lifts off, plus the share given back",
+        formula: "F_0 - (1 - R) * TW * OH / WB",
+        inputs: [iW(c, "F_0", "Front axle unhitched", aw.front), iN("R", "Restoration", s.restorationUsed, ""), iW(c, "TW", "Tongue weight", tw), iL(c, "OH", "Rear axle to ball", d.overhang), iL(c, "WB", "Wheelbase", v.wheelbase)],
+        result: rW(c, "F_wd", w.front),
+        note: s.restorationIsTarget ? "Restoration taken at the target, as it is not measured yet." : undefined,
+      });
+      steps.push({
+        id: "wd-rear",
+        title: "Rear axle with weight distribution",
+        formulaWords: "Unhitched rear load plus the tongue weight plus the lifted load, less the share given back to the front",
+        formula: "R_0 + TW + (1 - R) * TW * OH / WB",
+        inputs: [iW(c, "R_0", "Rear axle unhitched", aw.rear), iN("R", "Restoration", s.restorationUsed, ""), iW(c, "TW", "Tongue weight", tw), iL(c, "OH", "Rear axle to ball", d.overhang), iL(c, "WB", "Wheelbase", v.wheelbase)],
+        result: rW(c, "R_wd", w.rear),
+        note: "Load moved back to the trailer's axles is left out, so this errs on the heavy side.",
+      });
+    }
+  }
+  if (missing.length) result.missing = missing;
+  if (!c.detail) return result;
+
+  if (wd?.fenderUnhitched !== undefined && wd.fenderHitched !== undefined)
+    steps.unshift({
+      id: "target-fender-height",
+      title: "Fender height to aim for",
+      formulaWords: "Unhitched height plus the hitched rise times one minus the target share",
+      formula: "H1 + (H2 - H1) * (1 - t)",
+      inputs: [iL(c, "H1", "Fender height unhitched", wd.fenderUnhitched), iL(c, "H2", "Fender height hitched, WD released", wd.fenderHitched), iN("t", "Restoration target", s.target, "")],
+      result: rL(c, "H3_target", s.targetFenderHeight!),
+    });
+  if (s.restoration !== undefined)
+    steps.splice(1, 0, {
+      id: "restoration",
+      title: "Front axle load restoration",
+      formulaWords: "Drop from hitched to hitched-with-WD, divided by the rise from unhitched to hitched",
+      formula: "(H2 - H3) / (H2 - H1) * 100",
+      inputs: [iL(c, "H1", "Fender height unhitched", wd!.fenderUnhitched!), iL(c, "H2", "Fender height hitched, WD released", wd!.fenderHitched!), iL(c, "H3", "Fender height hitched with WD", wd!.fenderWithWd!)],
+      result: rN("FALR", s.restoration * 100, "%"),
+    });
+  if (!d.wdUsed && gov)
+    steps.push({
+      id: "wd-need",
+      title: "Closest weight-carrying limit",
+      formulaWords: "The weight-carrying limit with the least room",
+      formula: "L_wc - W",
+      inputs: [iW(c, "L_wc", gov[1], gov[2]), iW(c, "W", govActual === gtw ? "Gross trailer weight" : "Tongue weight", govActual)],
+      result: rW(c, "M_wc", gov[2] - govActual),
+    });
+  result.steps = steps;
+  result.cautions = CAUTIONS;
+  const advice: string[] = [];
+  if (!d.wdUsed) {
+    if (required) advice.push("Fit weight distribution rated for this tongue weight, or tow a lighter trailer: the weight-carrying limits are exceeded.");
+    else if (result.advisable) advice.push("Weight distribution is worth fitting: the weight-carrying limits are nearly reached.");
+  } else if (s.restoration !== undefined) {
+    if (s.restoration > 1 + EPS) advice.push(`Ease the spring bars: the front fender should come to about ${fL(c, s.targetFenderHeight!)}.`);
+    else if (s.restoration < s.target * (1 - EPS)) advice.push(`Tighten the spring bars until the front fender comes down to about ${fL(c, s.targetFenderHeight!)}.`);
+  } else if (s.targetFenderHeight !== undefined) {
+    advice.push(`Adjust the weight distribution until the front fender sits at about ${fL(c, s.targetFenderHeight)}, then enter that height.`);
+  }
+  for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
+  result.advice = advice;
+  if (!d.wdUsed)
+    result.message = required
+      ? "Weight distribution is needed: without it this trailer is over the weight-carrying limits."
+      : result.advisable
+        ? "Weight distribution is advisable: the trailer is close to the weight-carrying limits."
+        : status === "incomplete"
+          ? "Enter the trailer's weights and the weight-carrying ratings to tell whether weight distribution is needed."
+          : `Weight distribution is not needed for this trailer${gov ? ` (closest limit: ${gov[1].toLowerCase()}, ${fW(c, gov[2])})` : ""}.`;
+  else
+    result.message =
+      s.restoration === undefined
+        ? s.targetFenderHeight !== undefined
+          ? `Adjust the front fender to about ${fL(c, s.targetFenderHeight)} (${fP(s.target)} restoration).`
+          : "Measure the front fender height unhitched, hitched, and hitched with weight distribution."
+        : `The weight distribution gives back ${fP(s.restoration)} of the front axle's lost load; the target is ${fP(s.target)}.`;
+  return result;
+}

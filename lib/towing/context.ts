@@ -1,0 +1,129 @@
+/**
+ * What every check shares: the unit set for display, the tight threshold, whether to build steps and texts,
+ * and small helpers for quantities, statuses and steps. All inputs to these helpers are canonical (lb, in).
+ */
+import type { CheckStatus, Governing, Margin, MissingField, Quantity, Step, StepInput } from "./types";
+import { lengthOut, weightOut, type UnitSet, type UnitString } from "./units";
+
+/** Relative tolerance for comparisons, so a rig converted between unit systems lands on the same side of a limit. */
+export const EPS = 1e-9;
+
+export interface Ctx {
+  u: UnitSet;
+  /** Build steps, messages, advice and cautions (false on the fast path). */
+  detail: boolean;
+  tight: number;
+  /** Accessory reference lever arm, canonical inches. */
+  referenceArm: number;
+}
+
+export const NO_TEXT: string[] = [];
+export const NO_STEPS: Step[] = [];
+
+// ---- quantities in the rig's units ----
+export function qW(c: Ctx, lb: number): Quantity {
+  return { value: weightOut(lb, c.u), unit: c.u.weight };
+}
+export function qL(c: Ctx, inches: number): Quantity {
+  return { value: lengthOut(inches, c.u), unit: c.u.length };
+}
+export function qP(ratio: number): Quantity {
+  return { value: ratio * 100, unit: "%" };
+}
+
+// ---- formatting for sentences (the UI does its own rounding for numbers it shows) ----
+function group(n: number): string {
+  const neg = n < 0;
+  let s = String(Math.abs(n));
+  let out = "";
+  while (s.length > 3) {
+    out = "," + s.slice(-3) + out;
+    s = s.slice(0, -3);
+  }
+  return (neg ? "-" : "") + s + out;
+}
+export function fW(c: Ctx, lb: number): string {
+  return `${group(Math.round(weightOut(lb, c.u)))} ${c.u.weight}`;
+}
+export function fL(c: Ctx, inches: number): string {
+  const v = lengthOut(inches, c.u);
+  return c.u.length === "mm" ? `${group(Math.round(v))} mm` : `${Math.round(v * 10) / 10} in`;
+}
+export function fP(ratio: number): string {
+  return `${Math.round(ratio * 1000) / 10} %`;
+}
+export function fA(deg: number): string {
+  return `${Math.round(deg * 10) / 10}°`;
+}
+
+// ---- statuses ----
+export function lessOrEqual(a: number, b: number): boolean {
+  return a <= b + EPS * Math.max(1, Math.abs(b));
+}
+
+/** Status of `actual` against an upper `limit`: over below zero margin, tight under the threshold. */
+export function statusOf(actual: number, limit: number, tight: number): CheckStatus {
+  const margin = limit - actual;
+  const tol = EPS * Math.max(1, Math.abs(limit), Math.abs(actual));
+  if (margin < -tol) return "over";
+  const ratio = limit > 0 ? margin / limit : margin > tol ? 1 : 0;
+  if (ratio < tight - EPS) return "tight";
+  return "within";
+}
+
+export function ratioOf(actual: number, limit: number): number {
+  const margin = limit - actual;
+  if (limit > 0) return margin / limit;
+  return margin >= 0 ? 0 : -1;
+}
+
+export function marginW(c: Ctx, actual: number, limit: number): Margin {
+  return { value: weightOut(limit - actual, c.u), unit: c.u.weight, ratio: ratioOf(actual, limit) };
+}
+export function marginL(c: Ctx, actual: number, limit: number): Margin {
+  return { value: lengthOut(limit - actual, c.u), unit: c.u.length, ratio: ratioOf(actual, limit) };
+}
+
+const RANK: Record<CheckStatus, number> = { within: 0, tight: 1, incomplete: 2, over: 3 };
+
+/** Worst of statuses: over beats incomplete beats tight beats within. */
+export function worst(statuses: CheckStatus[]): CheckStatus {
+  let w: CheckStatus = "within";
+  for (const s of statuses) if (RANK[s] > RANK[w]) w = s;
+  return w;
+}
+
+/** A known "over" stands even when data is missing: more data can only add limits. */
+export function withMissing(status: CheckStatus, missing: MissingField[]): CheckStatus {
+  if (status === "over") return "over";
+  return missing.length ? "incomplete" : status;
+}
+
+export function govW(c: Ctx, id: string, label: string, lb: number): Governing {
+  return { id, label, value: weightOut(lb, c.u), unit: c.u.weight };
+}
+
+// ---- step inputs ----
+export function iW(c: Ctx, symbol: string, label: string, lb: number): StepInput {
+  return { symbol, label, value: weightOut(lb, c.u), unit: c.u.weight };
+}
+export function iL(c: Ctx, symbol: string, label: string, inches: number): StepInput {
+  return { symbol, label, value: lengthOut(inches, c.u), unit: c.u.length };
+}
+export function iN(symbol: string, label: string, value: number, unit: UnitString): StepInput {
+  return { symbol, label, value, unit };
+}
+export function rW(c: Ctx, symbol: string, lb: number) {
+  return { symbol, value: weightOut(lb, c.u), unit: c.u.weight };
+}
+export function rL(c: Ctx, symbol: string, inches: number) {
+  return { symbol, value: lengthOut(inches, c.u), unit: c.u.length };
+}
+export function rN(symbol: string, value: number, unit: UnitString) {
+  return { symbol, value, unit };
+}
+
+/** Keep a number finite whatever arrives (inputs are validated, but a result must never carry NaN). */
+export function finite(n: number): number {
+  return Number.isFinite(n) ? n : 0;
+}

@@ -1,0 +1,96 @@
+/**
+ * Entry points: evaluateRig (full, with steps and texts) and evaluateRigFast (statuses, governing items and
+ * margins, no steps, for the fleet matrix). Both run the same check functions; the fast path switches off
+ * steps and texts through the context.
+ */
+import { toCanonical } from "./convert-rig";
+import { type Ctx } from "./context";
+import { derive } from "./derive";
+import type { RigInput } from "./input";
+import { checkAccessoryFit } from "./checks/accessory-fit";
+import { checkAxleLoads } from "./checks/axle-loads";
+import { checkBallMount } from "./checks/ball-mount";
+import { checkCombinedWeight } from "./checks/combined-weight";
+import { checkEnvelope } from "./checks/envelope";
+import { checkPayload } from "./checks/payload";
+import { checkTongueMeasure } from "./checks/tongue-measure";
+import { checkTongueShare } from "./checks/tongue-share";
+import { buildVerdict } from "./checks/verdict";
+import { checkWeakestLink } from "./checks/weakest-link";
+import { checkWeightDistribution } from "./checks/weight-distribution";
+import type { AnyCheckResult, CheckId, EvaluateOptions, FastRigResult, RigResult } from "./types";
+import { CHECK_IDS } from "./types";
+import { lengthIn, unitSet } from "./units";
+import { CORE_VERSION } from "./version";
+import type { Derived } from "./derive";
+
+/** Default tight threshold: 10 % of the limit. */
+export const DEFAULT_TIGHT_MARGIN_RATIO = 0.1;
+/** Default accessory reference arm, inches. Common practice, no published source. */
+export const DEFAULT_REFERENCE_ARM_IN = 10;
+
+type CheckFn = (d: Derived, c: Ctx) => AnyCheckResult | null;
+
+/** The checks in their stable order. To add a check, add its id to CHECK_IDS and its function here. */
+const CHECKS: ReadonlyArray<[CheckId, CheckFn]> = [
+  ["weakest-link", checkWeakestLink],
+  ["tongue-share", checkTongueShare],
+  ["tongue-measure", checkTongueMeasure],
+  ["payload", checkPayload],
+  ["combined-weight", checkCombinedWeight],
+  ["axle-loads", checkAxleLoads],
+  ["weight-distribution", checkWeightDistribution],
+  ["ball-mount", checkBallMount],
+  ["accessory-fit", checkAccessoryFit],
+  ["envelope", checkEnvelope],
+];
+
+function context(rig: RigInput, options: EvaluateOptions | undefined, detail: boolean): Ctx {
+  const u = unitSet(rig.units);
+  const t = options?.tightMarginRatio;
+  const arm = options?.accessoryReferenceArm;
+  return {
+    u,
+    detail,
+    tight: typeof t === "number" && Number.isFinite(t) ? Math.min(0.5, Math.max(0, t)) : DEFAULT_TIGHT_MARGIN_RATIO,
+    referenceArm: typeof arm === "number" && Number.isFinite(arm) && arm > 0 ? lengthIn(arm, u) : DEFAULT_REFERENCE_ARM_IN,
+  };
+}
+
+function run(rig: RigInput, c: Ctx) {
+  const d = derive(toCanonical(rig));
+  const checks: AnyCheckResult[] = [];
+  const notApplicable: CheckId[] = [];
+  for (const [id, fn] of CHECKS) {
+    const r = fn(d, c);
+    if (r) checks.push(r);
+    else notApplicable.push(id);
+  }
+  return { checks, notApplicable, verdict: buildVerdict(checks, c) };
+}
+
+/**
+ * Evaluate a validated rig (the output of parseRig / rigInputSchema): every applicable check with its steps,
+ * cautions and advice, and the verdict. Values come back in the rig's unit system.
+ */
+export function evaluateRig(input: RigInput, options?: EvaluateOptions): RigResult {
+  const { checks, notApplicable, verdict } = run(input, context(input, options, true));
+  return { coreVersion: CORE_VERSION, units: input.units, checks, notApplicable, verdict };
+}
+
+/** Statuses, margins and governing items without steps or texts: for fleet matrices. */
+export function evaluateRigFast(input: RigInput, options?: EvaluateOptions): FastRigResult {
+  const { checks, verdict } = run(input, context(input, options, false));
+  return {
+    coreVersion: CORE_VERSION,
+    units: input.units,
+    level: verdict.level,
+    levelFromCheckedOnly: verdict.levelFromCheckedOnly,
+    complete: verdict.complete,
+    incomplete: verdict.incomplete,
+    governing: verdict.governing,
+    checks: checks.map((ch) => ({ id: ch.id, status: ch.status, margin: ch.margin, governing: ch.governing })),
+  };
+}
+
+export { CHECK_IDS };

@@ -1,0 +1,29 @@
+/**
+ * Towmargin's calculation core. Pure TypeScript: no React, no Next.js, no database, no server code.
+ * See docs/core.md.
+ */
+export { CORE_VERSION } from "./version";
+export { evaluateRig, evaluateRigFast, DEFAULT_TIGHT_MARGIN_RATIO, DEFAULT_REFERENCE_ARM_IN } from "./evaluate";
+export {
+  rigInputSchema,
+  parseRig,
+  FIELD_RANGES,
+  TRAILER_TYPES,
+  ACCESSORY_TYPES,
+  RECEIVER_SIZES,
+  BALL_SIZES,
+  BRAKE_TYPES,
+  type RigInput,
+  type VehicleInput,
+  type TrailerInput,
+  type AccessoryInput,
+  type ParseRigResult,
+  type TrailerType,
+  type AccessoryType,
+} from "./input";
+export { convertRig } from "./convert-rig";
+export { tongueWeightByScale, tongueWeightByBeam, tongueWeightByPublicScale, DIRECT_SCALE_LIMIT_LB, type MeasureResult, type AxlePair } from "./measure";
+export { GENERAL_CAUTIONS } from "./checks/verdict";
+export { TONGUE_BANDS } from "./derive";
+export { KG_PER_LB, MM_PER_IN, type UnitSystem, type UnitString } from "./units";
+export * from "./types";

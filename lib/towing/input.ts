@@ -1,0 +1,243 @@
+/**
+ * The rig as typed by staff or sent to the API: zod schemas shared by forms, route handlers and the core.
+ *
+ * Every weight is in lb (imperial) or kg (metric) and every length in in or mm, as the rig's `units` says.
+ * Ranges are written once in imperial and converted for metric through the units module, so one rig is
+ * valid in both systems. Every field except `units`, the trailer's and the accessory's `type` is optional:
+ * a check that needs a missing field reports "incomplete" and says what to measure.
+ */
+import { z } from "zod";
+import { KG_PER_LB, MM_PER_IN, type UnitSystem } from "./units";
+
+export const TRAILER_TYPES = [
+  "utility",
+  "enclosed-cargo",
+  "travel",
+  "boat",
+  "car-hauler",
+  "horse-livestock",
+  "other",
+] as const;
+export type TrailerType = (typeof TRAILER_TYPES)[number];
+
+export const ACCESSORY_TYPES = ["platform-rack", "hanging-rack", "cargo-carrier", "other"] as const;
+export type AccessoryType = (typeof ACCESSORY_TYPES)[number];
+
+/** Nominal receiver openings, in inches as the trade names them in either unit system. */
+export const RECEIVER_SIZES = ["1-1/4", "2", "2-1/2", "3"] as const;
+/** Nominal hitch-ball diameters, in inches as stamped. */
+export const BALL_SIZES = ["1-7/8", "2", "2-5/16", "3"] as const;
+export const BRAKE_TYPES = ["none", "surge", "electric", "other"] as const;
+
+type Kind = "mass" | "length" | "angle" | "percent";
+
+interface Range {
+  kind: Kind;
+  /** Bounds in imperial (lb, in), degrees or percent. */
+  min: number;
+  max: number;
+}
+
+/** Valid range and unit of every numeric field, by dotted path. Used by the schema and the docs. */
+export const FIELD_RANGES: Record<string, Range & { label: string }> = {};
+
+function unitOf(kind: Kind, units: UnitSystem): string {
+  if (kind === "mass") return units === "metric" ? "kg" : "lb";
+  if (kind === "length") return units === "metric" ? "mm" : "in";
+  return kind === "angle" ? "°" : "%";
+}
+
+function scaleOf(kind: Kind, units: UnitSystem): number {
+  if (units === "imperial") return 1;
+  if (kind === "mass") return KG_PER_LB;
+  if (kind === "length") return MM_PER_IN;
+  return 1;
+}
+
+function show(n: number): string {
+  const r = Math.round(n * 10) / 10;
+  return String(r);
+}
+
+function field(units: UnitSystem, path: string, label: string, kind: Kind, min: number, max: number) {
+  FIELD_RANGES[path] = { kind, min, max, label };
+  const s = scaleOf(kind, units);
+  const lo = min * s;
+  const hi = max * s;
+  const u = unitOf(kind, units);
+  return z
+    .number({ error: `${label}: enter a number in ${u}.` })
+    .min(lo, { error: `${label} must be at least ${show(lo)} ${u}.` })
+    .max(hi, { error: `${label} must be at most ${show(hi)} ${u}.` })
+    .optional();
+}
+
+function req<T extends z.ZodType>(schema: z.ZodOptional<T>): T {
+  return schema.unwrap();
+}
+
+function rigShape<U extends UnitSystem>(units: U) {
+  const m = (path: string, label: string, min: number, max: number) => field(units, path, label, "mass", min, max);
+  const l = (path: string, label: string, min: number, max: number) => field(units, path, label, "length", min, max);
+  const axlePair = (path: string, label: string) =>
+    z
+      .object({
+        front: req(m(`${path}.front`, `${label}, front axle`, 100, 30000)),
+        rear: req(m(`${path}.rear`, `${label}, rear axle`, 100, 30000)),
+      })
+      .optional();
+
+  return z.object({
+    units: z.literal(units),
+    /** Free text the shop gives the rig; not used in any check. */
+    name: z.string().max(200).optional(),
+    vehicle: z.object({
+      towRating: m("vehicle.towRating", "Tow rating (weight-carrying)", 0, 40000),
+      towRatingWd: m("vehicle.towRatingWd", "Tow rating with weight distribution", 0, 40000),
+      tongueWeightLimit: m("vehicle.tongueWeightLimit", "Vehicle tongue-weight limit", 0, 6000),
+      tongueWeightLimitWd: m("vehicle.tongueWeightLimitWd", "Vehicle tongue-weight limit with weight distribution", 0, 6000),
+      gvwr: m("vehicle.gvwr", "GVWR", 1000, 40000),
+      curbWeight: m("vehicle.curbWeight", "Curb weight", 500, 40000),
+      payloadLabel: m("vehicle.payloadLabel", "Payload on the label", 0, 20000),
+      gcwr: m("vehicle.gcwr", "GCWR", 1000, 80000),
+      gawrFront: m("vehicle.gawrFront", "Front GAWR", 300, 30000),
+      gawrRear: m("vehicle.gawrRear", "Rear GAWR", 300, 30000),
+      axleWeights: axlePair("vehicle.axleWeights", "Weighed axle load, unhitched and loaded"),
+      axleWeightsHitched: axlePair("vehicle.axleWeightsHitched", "Weighed axle load, hitched"),
+      wheelbase: l("vehicle.wheelbase", "Wheelbase", 40, 300),
+      rearAxleToHitch: l("vehicle.rearAxleToHitch", "Rear axle to ball (or pin)", 10, 200),
+      wdRequiredAbove: m("vehicle.wdRequiredAbove", "Weight distribution required above", 0, 40000),
+      departureAngle: field(units, "vehicle.departureAngle", "Departure angle", "angle", 1, 60),
+      tongueShareBand: z
+        .object({
+          min: req(field(units, "vehicle.tongueShareBand.min", "Lowest tongue-weight share", "percent", 1, 30)),
+          max: req(field(units, "vehicle.tongueShareBand.max", "Highest tongue-weight share", "percent", 1, 40)),
+        })
+        .refine((b) => b.min < b.max, { error: "The lowest share must be below the highest.", path: ["max"] })
+        .optional(),
+    }),
+    hitch: z
+      .object({
+        class: z
+          .number({ error: "Hitch class: enter 1 to 5." })
+          .int({ error: "Hitch class: enter a whole number from 1 to 5." })
+          .min(1, { error: "Hitch class: enter 1 to 5." })
+          .max(5, { error: "Hitch class: enter 1 to 5." })
+          .optional(),
+        receiverSize: z.enum(RECEIVER_SIZES, { error: "Receiver size: choose 1-1/4, 2, 2-1/2 or 3 in." }).optional(),
+        gtwRating: m("hitch.gtwRating", "Hitch gross trailer weight rating", 0, 40000),
+        twRating: m("hitch.twRating", "Hitch tongue weight rating", 0, 6000),
+        gtwRatingWd: m("hitch.gtwRatingWd", "Hitch gross trailer weight rating with weight distribution", 0, 40000),
+        twRatingWd: m("hitch.twRatingWd", "Hitch tongue weight rating with weight distribution", 0, 6000),
+        receiverHeight: l("hitch.receiverHeight", "Receiver height", 4, 40),
+        pinToFascia: l("hitch.pinToFascia", "Pin hole to fascia", 0, 24),
+      })
+      .optional(),
+    trailer: z
+      .object({
+        type: z.enum(TRAILER_TYPES, { error: "Trailer type: choose one from the list." }),
+        grossTrailerWeight: m("trailer.grossTrailerWeight", "Gross trailer weight", 50, 30000),
+        tongueWeight: m("trailer.tongueWeight", "Tongue weight", 0, 6000),
+        tongueWeightBasis: z.enum(["measured", "estimated"]).optional(),
+        tongueMeasurement: z
+          .object({
+            scaleReading: req(m("trailer.tongueMeasurement.scaleReading", "Scale reading", 0, 6000)),
+            blockToJack: l("trailer.tongueMeasurement.blockToJack", "Block to jack", 1, 120),
+            jackToScale: l("trailer.tongueMeasurement.jackToScale", "Jack to scale", 0, 120),
+          })
+          .optional(),
+        couplerHeight: l("trailer.couplerHeight", "Coupler height", 4, 40),
+        couplerRating: m("trailer.couplerRating", "Coupler rating", 0, 40000),
+        couplerBallSize: z.enum(BALL_SIZES, { error: "Coupler ball size: choose one from the list." }).optional(),
+        ballSize: z.enum(BALL_SIZES, { error: "Ball size: choose one from the list." }).optional(),
+        ballRating: m("trailer.ballRating", "Ball rating", 0, 40000),
+        brakes: z.enum(BRAKE_TYPES, { error: "Brakes: choose one from the list." }).optional(),
+        safetyChainRating: m("trailer.safetyChainRating", "Safety chain rating (each chain)", 0, 60000),
+      })
+      .optional(),
+    ballMount: z
+      .object({
+        gtwRating: m("ballMount.gtwRating", "Ball mount gross trailer weight rating", 0, 40000),
+        twRating: m("ballMount.twRating", "Ball mount tongue weight rating", 0, 6000),
+        drop: l("ballMount.drop", "Ball mount drop (negative for a rise)", -12, 16),
+        length: l("ballMount.length", "Ball mount length, pin to ball", 0, 30),
+        squatAllowance: l("ballMount.squatAllowance", "Expected rear squat when hitched", 0, 8),
+      })
+      .optional(),
+    extender: z
+      .object({
+        length: req(l("extender.length", "Extender length", 0, 24)),
+        twRating: m("extender.twRating", "Extender tongue weight rating", 0, 6000),
+      })
+      .optional(),
+    weightDistribution: z
+      .object({
+        used: z.boolean({ error: "Weight distribution used: yes or no." }),
+        tongueRating: m("weightDistribution.tongueRating", "Weight distribution tongue rating", 0, 6000),
+        fenderUnhitched: l("weightDistribution.fenderUnhitched", "Front fender height unhitched", 10, 80),
+        fenderHitched: l("weightDistribution.fenderHitched", "Front fender height hitched, weight distribution off", 10, 80),
+        fenderWithWd: l("weightDistribution.fenderWithWd", "Front fender height hitched with weight distribution", 10, 80),
+        restorationTarget: field(units, "weightDistribution.restorationTarget", "Restoration target", "percent", 10, 100),
+      })
+      .optional(),
+    load: z
+      .object({
+        occupants: m("load.occupants", "Occupants", 0, 5000),
+        cargo: m("load.cargo", "Cargo in the vehicle", 0, 20000),
+        hitchHardware: m("load.hitchHardware", "Hitch hardware", 0, 1000),
+      })
+      .optional(),
+    accessory: z
+      .object({
+        type: z.enum(ACCESSORY_TYPES, { error: "Accessory type: choose one from the list." }),
+        weight: m("accessory.weight", "Accessory weight", 0, 1000),
+        loadWeight: m("accessory.loadWeight", "Load on the accessory", 0, 2000),
+        loadCenterFromPin: l("accessory.loadCenterFromPin", "Pin hole to the load's centre", 0, 80),
+        foldClearance: l("accessory.foldClearance", "Fold clearance needed", 0, 40),
+        lowestPointBelowShankTop: l("accessory.lowestPointBelowShankTop", "Lowest point below the shank top", -20, 40),
+        lowestPointBehindPin: l("accessory.lowestPointBehindPin", "Lowest point behind the pin", 0, 80),
+        shankRise: l("accessory.shankRise", "Shank rise", -12, 16),
+      })
+      .optional(),
+  });
+}
+
+const imperialRigSchema = rigShape("imperial");
+const metricRigSchema = rigShape("metric");
+
+/** The rig schema: one shape per unit system, chosen by `units`. */
+export const rigInputSchema = z
+  .discriminatedUnion("units", [imperialRigSchema, metricRigSchema], {
+    error: "Units: choose imperial (lb, in) or metric (kg, mm).",
+  })
+  .superRefine((rig, ctx) => {
+    if (rig.trailer && rig.accessory) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["accessory"],
+        message: "A rig carries a trailer or a hitch-mounted accessory, not both at once.",
+      });
+    }
+  });
+
+/** A validated rig (the schema's output). */
+export type RigInput = z.output<typeof rigInputSchema>;
+export type VehicleInput = RigInput["vehicle"];
+export type TrailerInput = NonNullable<RigInput["trailer"]>;
+export type AccessoryInput = NonNullable<RigInput["accessory"]>;
+
+export type ParseRigResult =
+  | { ok: true; rig: RigInput }
+  | { ok: false; fieldErrors: Record<string, string[]> };
+
+/** Validate unknown input (a form, a request body, a file). Never throws; error keys are dotted paths. */
+export function parseRig(value: unknown): ParseRigResult {
+  const parsed = rigInputSchema.safeParse(value);
+  if (parsed.success) return { ok: true, rig: parsed.data };
+  const fieldErrors: Record<string, string[]> = {};
+  for (const issue of parsed.error.issues) {
+    const key = issue.path.length ? issue.path.map(String).join(".") : "rig";
+    (fieldErrors[key] ??= []).push(issue.message);
+  }
+  return { ok: false, fieldErrors };
+}

@@ -1,0 +1,251 @@
+/** Result types of the core. Every number is unrounded, finite, and in the rig's own unit system. */
+import type { UnitString, UnitSystem } from "./units";
+
+export type CheckStatus = "within" | "tight" | "over" | "incomplete";
+export type VerdictLevel = "within" | "tight" | "over";
+
+export const CHECK_IDS = [
+  "weakest-link",
+  "tongue-share",
+  "tongue-measure",
+  "payload",
+  "combined-weight",
+  "axle-loads",
+  "weight-distribution",
+  "ball-mount",
+  "accessory-fit",
+  "envelope",
+] as const;
+export type CheckId = (typeof CHECK_IDS)[number];
+
+export interface Quantity {
+  value: number;
+  unit: UnitString;
+}
+
+export interface Margin {
+  /** limit − actual, in the check's unit (negative when over). */
+  value: number;
+  unit: UnitString;
+  /** margin ÷ limit (0.1 = 10 % of the limit left). */
+  ratio: number;
+}
+
+export interface Governing {
+  /** Stable id of the item that governs, e.g. "hitch.twRating". */
+  id: string;
+  label: string;
+  value: number;
+  unit: UnitString;
+}
+
+export interface StepInput {
+  symbol: string;
+  label: string;
+  value: number;
+  unit: UnitString;
+}
+
+/** One worked step: ready for a trainer to show. `formula` parses with mathjs. */
+export interface Step {
+  id: string;
+  title: string;
+  formulaWords: string;
+  formula: string;
+  inputs: StepInput[];
+  result: { symbol: string; value: number; unit: UnitString };
+  note?: string;
+}
+
+export interface MissingField {
+  /** Dotted path of the input field, e.g. "vehicle.gvwr". */
+  field: string;
+  what: string;
+  where: string;
+}
+
+export interface CheckResult {
+  id: CheckId;
+  title: string;
+  status: CheckStatus;
+  actual?: Quantity;
+  limit?: Quantity;
+  margin?: Margin;
+  governing?: Governing;
+  /** One plain sentence. */
+  message: string;
+  advice: string[];
+  cautions: string[];
+  missing?: MissingField[];
+  /** True when a number in this check is an estimate, not a measurement. */
+  estimated?: boolean;
+  steps: Step[];
+}
+
+export interface Link {
+  id: string;
+  label: string;
+  /** What the link limits: the gross trailer weight or the tongue weight. */
+  limits: "gross-trailer-weight" | "tongue-weight";
+  rating: Quantity;
+  actual?: Quantity;
+  margin?: Margin;
+  status: CheckStatus;
+}
+
+export interface WeakestLinkResult extends CheckResult {
+  id: "weakest-link";
+  links: Link[];
+  governingGrossTrailerWeight?: Governing;
+  governingTongueWeight?: Governing;
+}
+
+export interface TongueShareResult extends CheckResult {
+  id: "tongue-share";
+  share?: number;
+  band: { min: number; max: number; source: "vehicle" | "trailer-type" };
+  /** Tongue weight estimated from the band when it was not weighed. */
+  estimatedTongueWeight?: { low: Quantity; high: Quantity };
+}
+
+export interface TongueMeasureResult extends CheckResult {
+  id: "tongue-measure";
+  method?: "scale" | "beam" | "public-scale" | "entered";
+  measuredTongueWeight?: Quantity;
+}
+
+export interface AxleLoads {
+  front: Quantity;
+  rear: Quantity;
+}
+
+export interface AxleLoadsResult extends CheckResult {
+  id: "axle-loads";
+  frontChange?: Quantity;
+  rearChange?: Quantity;
+  unhitched?: AxleLoads;
+  hitched?: AxleLoads;
+  withWd?: AxleLoads;
+}
+
+export interface WeightDistributionResult extends CheckResult {
+  id: "weight-distribution";
+  restoration?: number;
+  target: number;
+  targetFenderHeight?: Quantity;
+  required: boolean;
+  advisable: boolean;
+  withWd?: AxleLoads;
+}
+
+export interface BallMountResult extends CheckResult {
+  id: "ball-mount";
+  /** Drop needed to ride level (negative: a rise). */
+  dropNeeded?: Quantity;
+  nearestCommonDrop?: Quantity;
+}
+
+export interface AccessoryFitResult extends CheckResult {
+  id: "accessory-fit";
+  parts: Array<{ id: string; label: string; status: CheckStatus; actual?: Quantity; limit?: Quantity; margin?: Margin }>;
+  accessoryAngle?: Quantity;
+  groundClearance?: Quantity;
+  shankRiseNeeded?: Quantity;
+}
+
+export interface EnvelopeLine {
+  id: string;
+  label: string;
+  /** "gtw-max": GTW = value; "tw-max": TW = value; "share": TW = slope × GTW. */
+  kind: "gtw-max" | "tw-max" | "share-min" | "share-max";
+  value?: number;
+  slope?: number;
+}
+
+export interface EnvelopeResult extends CheckResult {
+  id: "envelope";
+  maxGrossTrailerWeight?: Quantity;
+  maxTongueWeight?: Quantity;
+  /** The constraint that binds first as the trailer grows. */
+  binding?: Governing;
+  /** Weight that may still go into the vehicle with this trailer hitched. */
+  vehicleLoadRoom?: Quantity;
+  /** Lines bounding the allowed (GTW, TW) region, values in the rig's weight unit. */
+  lines: EnvelopeLine[];
+  /** Corners of the allowed region, in the rig's weight unit, in order. */
+  region: Array<{ grossTrailerWeight: number; tongueWeight: number }>;
+  regionUnit: UnitString;
+}
+
+export interface VerdictAction {
+  checkId: CheckId;
+  status: CheckStatus;
+  advice: string[];
+}
+
+export interface VerdictResult {
+  id: "verdict";
+  title: string;
+  /** Worst of the checks with data, raised to at least "tight" when any check is incomplete. */
+  level: VerdictLevel;
+  /** Worst of the checks with data only. */
+  levelFromCheckedOnly: VerdictLevel;
+  /** False when any check lacks data. */
+  complete: boolean;
+  incomplete: CheckId[];
+  message: string;
+  /** The check and item with the least margin. */
+  governing?: Governing & { checkId: CheckId };
+  actions: VerdictAction[];
+  cautions: string[];
+  tightMarginRatio: number;
+}
+
+export type AnyCheckResult =
+  | WeakestLinkResult
+  | TongueShareResult
+  | TongueMeasureResult
+  | AxleLoadsResult
+  | WeightDistributionResult
+  | BallMountResult
+  | AccessoryFitResult
+  | EnvelopeResult
+  | CheckResult;
+
+export interface RigResult {
+  coreVersion: string;
+  units: UnitSystem;
+  /** The checks that apply to this rig, in CHECK_IDS order. */
+  checks: AnyCheckResult[];
+  /** Checks that do not apply (for instance ball-mount on a rig with a bike rack). */
+  notApplicable: CheckId[];
+  verdict: VerdictResult;
+}
+
+export interface FastCheck {
+  id: CheckId;
+  status: CheckStatus;
+  margin?: Margin;
+  governing?: Governing;
+}
+
+export interface FastRigResult {
+  coreVersion: string;
+  units: UnitSystem;
+  level: VerdictLevel;
+  levelFromCheckedOnly: VerdictLevel;
+  complete: boolean;
+  incomplete: CheckId[];
+  governing?: Governing & { checkId: CheckId };
+  checks: FastCheck[];
+}
+
+export interface EvaluateOptions {
+  /** Margin under this share of the limit makes a check "tight". Default 0.1 (10 %). Range 0–0.5. */
+  tightMarginRatio?: number;
+  /**
+   * Lever arm, pin hole to the point where a hitch's tongue rating is taken to apply, in the rig's length unit.
+   * Used to weigh an accessory's moment. Default 10 in (254 mm). Common practice, no published source.
+   */
+  accessoryReferenceArm?: number;
+}

@@ -1,0 +1,89 @@
+import { z } from "zod";
+import { ROLES } from "@/lib/roles";
+
+export const emailField = z
+  .string({ error: "Enter an e-mail address." })
+  .trim()
+  .toLowerCase()
+  .min(1, "Enter an e-mail address.")
+  .max(254, "That address is too long.")
+  .pipe(z.email({ error: "Enter an e-mail address like name@example.com." }));
+
+// Long enough to resist guessing; capped so hashing cannot be used to tie up the server.
+export const newPasswordField = z
+  .string({ error: "Choose a password." })
+  .min(10, "Use at least 10 characters.")
+  .max(128, "Use at most 128 characters.");
+
+const personName = z
+  .string({ error: "Enter your name." })
+  .trim()
+  .min(1, "Enter your name.")
+  .max(80, "Use at most 80 characters.");
+
+export const signInSchema = z.object({
+  email: emailField,
+  password: z.string({ error: "Enter your password." }).min(1, "Enter your password.").max(128, "That password is too long."),
+  next: z.string().max(500).optional(),
+});
+
+export const signUpSchema = z.object({
+  name: personName,
+  email: emailField,
+  password: newPasswordField,
+  organisationName: z
+    .string({ error: "Name your shop or fleet." })
+    .trim()
+    .min(2, "Use at least 2 characters.")
+    .max(80, "Use at most 80 characters."),
+  organisationKind: z.enum(["shop", "fleet"], { error: "Choose a hitch shop or a fleet." }),
+});
+
+export const forgotPasswordSchema = z.object({ email: emailField });
+
+export const resetPasswordSchema = z
+  .object({
+    token: z.string().min(10).max(200),
+    password: newPasswordField,
+    confirmPassword: z.string(),
+  })
+  .refine((value) => value.password === value.confirmPassword, {
+    path: ["confirmPassword"],
+    message: "The two passwords differ.",
+  });
+
+export const acceptInvitationSchema = z.object({
+  token: z.string().min(10).max(200),
+  name: personName,
+  password: newPasswordField,
+});
+
+export const roleField = z.enum(ROLES, { error: "Choose a role." });
+
+export const inviteSchema = z.object({ email: emailField, role: roleField });
+
+export const changeRoleSchema = z.object({ membershipId: z.string().min(1).max(64), role: roleField });
+
+export const removeMemberSchema = z.object({ membershipId: z.string().min(1).max(64) });
+
+export const revokeInvitationSchema = z.object({ invitationId: z.string().min(1).max(64) });
+
+export const organisationSettingsSchema = z.object({
+  name: z.string().trim().min(2, "Use at least 2 characters.").max(80, "Use at most 80 characters."),
+  units: z.enum(["imperial", "metric"], { error: "Choose imperial or metric." }),
+  tightMarginPercent: z.coerce
+    .number({ error: "Enter a percentage." })
+    .min(1, "Use at least 1 %.")
+    .max(50, "Use at most 50 %."),
+});
+
+export type SignInInput = z.infer<typeof signInSchema>;
+export type SignUpInput = z.infer<typeof signUpSchema>;
+export type InviteInput = z.infer<typeof inviteSchema>;
+export type OrganisationSettingsInput = z.infer<typeof organisationSettingsSchema>;
+
+/** Only same-site paths may be a place to return to after sign-in. */
+export function safeReturnPath(next: string | undefined | null): string {
+  if (!next || !next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")) return "/overview";
+  return next;
+}
