@@ -20,7 +20,10 @@ export function useActionForm<TSchema extends z.ZodType<FieldValues, FieldValues
   const form = useForm<z.input<TSchema>, unknown, z.output<TSchema>>({
     resolver: zodResolver(schema as never) as never,
     defaultValues,
-    mode: "onTouched",
+    // Messages appear on the first submit, then follow each keystroke. Validating on blur would insert a
+    // message under the field just left and move the button out from under a pointer mid-click.
+    mode: "onSubmit",
+    reValidateMode: "onChange",
   });
 
   // The server's field messages land beside the same fields as the browser's.

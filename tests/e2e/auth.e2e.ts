@@ -1,0 +1,259 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { firstLink, latestMailTo, navLabels, openBrowser, PHONE, screenshot, signIn } from "./support/browser";
+
+type Session = Awaited<ReturnType<typeof openBrowser>>;
+
+const DEMO = {
+  owner: "owner@quillfield.example.com",
+  staff: "counter@quillfield.example.com",
+  trainer: "trainer@quillfield.example.com",
+  fleetManager: "fleet@fernhollow.example.com",
+};
+
+describe("signing up", () => {
+  let visitor: Session;
+  beforeAll(async () => {
+    visitor = await openBrowser();
+  });
+  afterAll(async () => visitor.close());
+
+  it("shows field messages for bad input and creates nothing", async () => {
+    const { page } = visitor;
+    await page.goto("/sign-up");
+    await page.getByLabel("E-mail").fill("not-an-address");
+    await page.getByLabel("Password").fill("short");
+    await page.getByRole("button", { name: "Create my organisation" }).click();
+    await page.getByText("Enter an e-mail address like name@example.com.").waitFor();
+    await screenshot(page, "sign-up-errors-desktop");
+    await expect(page.getByText("Use at least 10 characters.").isVisible()).resolves.toBe(true);
+    await expect(page.getByText("Enter your name.").isVisible()).resolves.toBe(true);
+  });
+
+  it("mails a confirmation link that creates the organisation with its owner", async () => {
+    const { page } = visitor;
+    await page.goto("/sign-up");
+    await page.getByLabel("Your name").fill("Odile Fenwright");
+    await page.getByLabel("E-mail").fill("odile@larkspur-tow.example.com");
+    await page.getByLabel("Password").fill("a long enough passphrase");
+    await page.getByLabel("Shop or fleet name").fill("Larkspur Tow Supply");
+    await page.getByRole("button", { name: "Create my organisation" }).click();
+    await page.getByText("Check your inbox at odile@larkspur-tow.example.com").waitFor();
+
+    const mail = await latestMailTo("odile@larkspur-tow.example.com");
+    expect(mail.subject).toBe("Finish signing up to Towmargin");
+    expect(mail.html).toContain("Finish signing up");
+    await page.goto(firstLink(mail.text, "/sign-up/confirm/"));
+    await page.getByRole("button", { name: "Finish signing up" }).click();
+    await page.waitForURL(/\/overview/);
+    await expect(page.getByRole("heading", { level: 1 }).innerText()).resolves.toBe("Hello, Odile Fenwright");
+    expect(await navLabels(page)).toEqual(["Overview", "Team", "Organisation", "Mailbox"]);
+  });
+
+  it("answers the same for an address that already has an account", async () => {
+    const { context } = visitor;
+    const page = await context.newPage();
+    await context.clearCookies();
+    await page.goto("/sign-up");
+    await page.getByLabel("Your name").fill("Someone Else");
+    await page.getByLabel("E-mail").fill(DEMO.staff);
+    await page.getByLabel("Password").fill("another long passphrase");
+    await page.getByLabel("Shop or fleet name").fill("Not Quillfield");
+    await page.getByRole("button", { name: "Create my organisation" }).click();
+    await page.getByText(`Check your inbox at ${DEMO.staff}: we sent a link to finish signing up.`).waitFor();
+    expect((await latestMailTo(DEMO.staff)).subject).toBe("Your Towmargin account");
+    await page.close();
+  });
+});
+
+describe("signing in with each role", () => {
+  const cases = [
+    { who: "owner", email: DEMO.owner, nav: ["Overview", "Team", "Organisation", "Mailbox"], role: "Owner" },
+    { who: "counter staff", email: DEMO.staff, nav: ["Overview"], role: "Counter staff" },
+    { who: "trainer", email: DEMO.trainer, nav: ["Overview"], role: "Trainer" },
+    { who: "fleet manager", email: DEMO.fleetManager, nav: ["Overview"], role: "Fleet manager" },
+  ];
+
+  for (const { who, email, nav, role } of cases) {
+    it(`the ${who} sees their navigation and is refused pages outside the role`, async () => {
+      const session = await openBrowser();
+      try {
+        const { page } = session;
+        await signIn(page, email);
+        expect(await navLabels(page)).toEqual(nav);
+        await expect(page.getByTestId("current-role").innerText()).resolves.toContain(role);
+        for (const path of ["/team", "/settings", "/mailbox"]) {
+          const response = await page.goto(path);
+          if (nav.length > 1) {
+            expect(response?.status(), path).toBe(200);
+          } else {
+            expect(response?.status(), path).toBe(403);
+            await expect(page.getByRole("heading", { name: "This page is not part of your role" }).isVisible()).resolves.toBe(true);
+          }
+        }
+      } finally {
+        await session.close();
+      }
+    });
+  }
+
+  it("gives one message for a wrong password and for an unknown address", async () => {
+    const session = await openBrowser();
+    try {
+      const { page } = session;
+      const messages: string[] = [];
+      for (const [email, password] of [
+        [DEMO.staff, "not the password"],
+        ["nobody@quillfield.example.com", "not the password"],
+      ] as const) {
+        await page.goto("/sign-in");
+        await page.getByLabel("E-mail").fill(email);
+        await page.getByLabel("Password").fill(password);
+        await page.getByRole("button", { name: "Sign in" }).click();
+        const status = page.getByRole("status").filter({ hasText: "do not match" });
+        await status.waitFor();
+        messages.push(await status.innerText());
+      }
+      expect(messages[0]).toBe("That e-mail and password do not match an account.");
+      expect(messages[1]).toBe(messages[0]);
+    } finally {
+      await session.close();
+    }
+  });
+
+  it("sends a signed-out visitor to sign-in and back to the page asked for", async () => {
+    const session = await openBrowser();
+    try {
+      const { page } = session;
+      await page.goto("/settings");
+      await page.waitForURL(/\/sign-in\?next=%2Fsettings/);
+      await page.getByLabel("E-mail").fill(DEMO.owner);
+      await page.getByLabel("Password").fill("towmargin-demo");
+      await page.getByRole("button", { name: "Sign in" }).click();
+      await page.waitForURL(/\/settings$/);
+      await expect(page.getByRole("heading", { level: 1 }).innerText()).resolves.toBe("Organisation");
+    } finally {
+      await session.close();
+    }
+  });
+});
+
+describe("signing out", () => {
+  it("ends the session on the server: the old cookie no longer opens anything", async () => {
+    const session = await openBrowser();
+    try {
+      const { page, context } = session;
+      await signIn(page, DEMO.staff);
+      const cookie = (await context.cookies()).find((c) => c.name === "towmargin_session");
+      expect(cookie?.httpOnly).toBe(true);
+      expect(cookie?.sameSite).toBe("Lax");
+      await page.getByRole("button", { name: "Sign out" }).click();
+      await page.waitForURL(/\/sign-in\?signed-out=1/);
+
+      // Replaying the old cookie must not work: the session is gone from the database.
+      const replay = await fetch(new URL("/api/v1/me", page.url()), { headers: { cookie: `towmargin_session=${cookie?.value}` } });
+      expect(replay.status).toBe(401);
+      const response = await page.goto("/overview");
+      expect(response?.url()).toContain("/sign-in");
+    } finally {
+      await session.close();
+    }
+  });
+});
+
+describe("inviting a member", () => {
+  it("the owner invites, the mail arrives, the new trainer joins and sees the trainer's navigation", async () => {
+    const owner = await openBrowser();
+    const invitee = await openBrowser(PHONE);
+    try {
+      await signIn(owner.page, DEMO.owner);
+      await owner.page.goto("/team");
+      await owner.page.getByLabel("E-mail").fill("wren@quillfield.example.com");
+      await owner.page.getByLabel("Role", { exact: true }).selectOption("trainer");
+      await owner.page.getByRole("button", { name: "Send invitation" }).click();
+      await owner.page.getByRole("cell", { name: "wren@quillfield.example.com", exact: true }).waitFor();
+      await screenshot(owner.page, "team-desktop");
+
+      const mail = await latestMailTo("wren@quillfield.example.com");
+      expect(mail.subject).toBe("Invitation to Quillfield Hitch & Trailer");
+      const link = firstLink(mail.text, "/invite/");
+
+      // The owner can read the same message in the development mailbox.
+      await owner.page.goto("/mailbox");
+      await owner.page.getByRole("link", { name: "Invitation to Quillfield Hitch & Trailer" }).first().click();
+      await owner.page.getByText("Text part").waitFor();
+
+      await invitee.page.goto(link);
+      await expect(invitee.page.getByRole("heading", { level: 1 }).innerText()).resolves.toBe("Join Quillfield Hitch & Trailer");
+      await invitee.page.getByLabel("Your name").fill("Wren Abernethy");
+      await invitee.page.getByLabel("Choose a password").fill("wren's long passphrase");
+      await screenshot(invitee.page, "invitation-phone");
+      await invitee.page.getByRole("button", { name: "Join" }).click();
+      await invitee.page.waitForURL(/\/overview/);
+      expect(await navLabels(invitee.page)).toEqual(["Overview"]);
+      await expect(invitee.page.getByText("You have joined Quillfield Hitch & Trailer.").isVisible()).resolves.toBe(true);
+
+      // The link works once.
+      const second = await openBrowser();
+      try {
+        await second.page.goto(link);
+        await expect(second.page.getByRole("heading", { level: 1 }).innerText()).resolves.toBe("This invitation is no longer open");
+      } finally {
+        await second.close();
+      }
+    } finally {
+      await owner.close();
+      await invitee.close();
+    }
+  });
+});
+
+describe("resetting a password", () => {
+  it("mails a single-use link; the new password works and the old one does not", async () => {
+    const session = await openBrowser();
+    try {
+      const { page } = session;
+      await page.goto("/forgot-password");
+      await page.getByLabel("E-mail").fill(DEMO.trainer);
+      await page.getByRole("button", { name: "Send me a link" }).click();
+      await page.getByText("If an account uses that address").waitFor();
+      const link = firstLink((await latestMailTo(DEMO.trainer)).text, "/reset-password/");
+      await page.goto(link);
+      await page.getByLabel("New password").fill("trainer's new passphrase");
+      await page.getByLabel("The same again").fill("trainer's new passphrase");
+      await page.getByRole("button", { name: "Set the new password" }).click();
+      await page.waitForURL(/\/sign-in\?reset=1/);
+      await signIn(page, DEMO.trainer, "trainer's new passphrase");
+      await page.goto(link);
+      await expect(page.getByRole("heading", { level: 1 }).innerText()).resolves.toBe("This link no longer works");
+    } finally {
+      await session.close();
+    }
+  });
+});
+
+describe("screens", () => {
+  it("renders sign-in and the workspace at desktop and phone widths", async () => {
+    for (const [label, viewport] of [
+      ["desktop", undefined],
+      ["phone", PHONE],
+    ] as const) {
+      const session = await openBrowser(viewport);
+      try {
+        const { page } = session;
+        await page.goto("/sign-in");
+        await screenshot(page, `sign-in-${label}`);
+        await page.goto("/");
+        await screenshot(page, `landing-${label}`);
+        await signIn(page, DEMO.owner);
+        await screenshot(page, `overview-${label}`);
+        await page.goto("/settings");
+        await screenshot(page, `settings-${label}`);
+        // Nothing wider than the window: the page must not scroll sideways on a phone.
+        const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+        expect(overflow).toBeLessThanOrEqual(0);
+      } finally {
+        await session.close();
+      }
+    }
+  });
+});

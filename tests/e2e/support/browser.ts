@@ -1,0 +1,78 @@
+import { createClient } from "@libsql/client";
+import { mkdirSync, mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { chromium, type BrowserContext, type Page } from "playwright-core";
+import { inject } from "vitest";
+import { CHROMIUM_PATH } from "./chromium";
+
+export const baseURL = () => inject("baseURL");
+
+export const DESKTOP = { width: 1280, height: 860 };
+export const PHONE = { width: 375, height: 760 };
+
+export const SCREENSHOT_DIR = join(process.cwd(), "test-results", "screens");
+
+/** A fresh browser profile (its own cookies), so each person in a test is really a different visitor. */
+export async function openBrowser(viewport = DESKTOP): Promise<{ context: BrowserContext; page: Page; close: () => Promise<void> }> {
+  const profile = mkdtempSync(join(tmpdir(), "towmargin-chromium-"));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: CHROMIUM_PATH,
+    headless: true,
+    viewport,
+    baseURL: baseURL(),
+    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+  });
+  const page = context.pages()[0] ?? (await context.newPage());
+  return {
+    context,
+    page,
+    close: async () => {
+      await context.close();
+      rmSync(profile, { recursive: true, force: true });
+    },
+  };
+}
+
+export async function screenshot(page: Page, name: string) {
+  mkdirSync(SCREENSHOT_DIR, { recursive: true });
+  await page.screenshot({ path: join(SCREENSHOT_DIR, `${name}.png`), fullPage: true });
+}
+
+export async function signIn(page: Page, email: string, password = "towmargin-demo") {
+  await page.goto("/sign-in");
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL(/\/overview/);
+}
+
+export async function navLabels(page: Page): Promise<string[]> {
+  return page.getByRole("navigation", { name: "Sections" }).getByRole("link").allInnerTexts();
+}
+
+/** The newest captured message to this address, read from the test database. */
+export async function latestMailTo(address: string, timeoutMs = 10_000): Promise<{ subject: string; text: string; html: string | null }> {
+  const client = createClient({ url: inject("databaseUrl") });
+  const deadline = Date.now() + timeoutMs;
+  try {
+    while (Date.now() < deadline) {
+      const result = await client.execute({
+        sql: "SELECT subject, text, html FROM captured_mail WHERE envelope_to = ? ORDER BY id DESC LIMIT 1",
+        args: [address],
+      });
+      const row = result.rows[0];
+      if (row) return { subject: String(row.subject), text: String(row.text), html: row.html === null ? null : String(row.html) };
+      await new Promise((resolve) => setTimeout(resolve, 150));
+    }
+  } finally {
+    client.close();
+  }
+  throw new Error(`No mail reached ${address} within ${timeoutMs} ms.`);
+}
+
+export function firstLink(text: string, pathPart: string): string {
+  const match = text.match(new RegExp(`https?://[^\\s]*${pathPart}[^\\s]*`));
+  if (!match) throw new Error(`No link containing ${pathPart} in:\n${text}`);
+  return match[0];
+}

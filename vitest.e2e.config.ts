@@ -1,0 +1,16 @@
+import { defineConfig } from "vitest/config";
+import { fileURLToPath } from "node:url";
+
+// Browser tests: one production server for the whole run, files one after another (2-core machine).
+export default defineConfig({
+  resolve: { alias: { "@": fileURLToPath(new URL("./", import.meta.url)) } },
+  test: {
+    include: ["tests/e2e/**/*.e2e.ts"],
+    globalSetup: ["tests/e2e/support/global-setup.ts"],
+    environment: "node",
+    pool: "forks",
+    fileParallelism: false,
+    testTimeout: 90_000,
+    hookTimeout: 180_000,
+  },
+});
