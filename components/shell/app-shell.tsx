@@ -16,7 +16,10 @@ export function AppShell({ access, mailbox, children }: { access: AccessContext;
       </a>
       <header className="no-print border-b border-rule bg-panel">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-2 sm:px-6">
-          <BrandLink href="/overview" />
+          <BrandLink href="/overview" className="mr-2" />
+          <nav aria-label="Sections" className="order-last -mx-1 w-full sm:order-none sm:mx-0 sm:w-auto">
+            <NavLinks items={items} />
+          </nav>
           <div className="ml-auto flex min-w-0 items-center gap-3">
             <div className="hidden text-right text-sm leading-tight sm:block">
               <div className="font-medium text-ink">{access.user.name}</div>
@@ -31,9 +34,6 @@ export function AppShell({ access, mailbox, children }: { access: AccessContext;
               </Button>
             </form>
           </div>
-          <nav aria-label="Sections" className="order-last -mx-1 w-full sm:order-none sm:mx-0 sm:w-auto">
-            <NavLinks items={items} />
-          </nav>
         </div>
         <div className="border-t border-rule bg-sunken/60 px-4 py-1.5 text-xs text-ink-soft sm:hidden">
           {access.user.name} · {ROLE_LABELS[access.role]} · {access.organisation.name}
