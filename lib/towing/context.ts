@@ -57,6 +57,12 @@ export function fA(deg: number): string {
 }
 
 // ---- statuses ----
+/** a < b by more than the tolerance: used to pick the governing item so that near-ties resolve the same way in both unit systems. */
+export function lessThan(a: number, b: number): boolean {
+  if (!Number.isFinite(b)) return a < b;
+  return a < b - Math.max(TINY, EPS * Math.abs(b));
+}
+
 export function lessOrEqual(a: number, b: number): boolean {
   return a <= b + EPS * Math.max(1, Math.abs(b));
 }
@@ -66,15 +72,21 @@ export function statusOf(actual: number, limit: number, tight: number): CheckSta
   const margin = limit - actual;
   const tol = EPS * Math.max(1, Math.abs(limit), Math.abs(actual));
   if (margin < -tol) return "over";
-  const ratio = limit > 0 ? margin / limit : margin > tol ? 1 : 0;
+  const ratio = limit > TINY ? margin / limit : margin > tol ? 1 : 0;
   if (ratio < tight - EPS) return "tight";
   return "within";
 }
 
+/** A limit smaller than this (in lb or in) counts as zero: no ratio is taken against it. */
+export const TINY = 1e-9;
+
+/** Bound for margin ratios, so a vanishingly small limit never yields Infinity. */
+export const RATIO_FLOOR = -1e6;
+
 export function ratioOf(actual: number, limit: number): number {
   const margin = limit - actual;
-  if (limit > 0) return margin / limit;
-  return margin >= 0 ? 0 : -1;
+  if (limit > TINY) return Math.max(RATIO_FLOOR, margin / limit);
+  return margin > EPS ? 1 : margin >= -EPS ? 0 : -1;
 }
 
 export function marginW(c: Ctx, actual: number, limit: number): Margin {

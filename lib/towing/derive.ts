@@ -1,6 +1,7 @@
 /**
  * Quantities several checks share, computed once per evaluation from the canonical (lb, in) rig.
  */
+import { lessOrEqual } from "./context";
 import type { RigInput, TrailerType } from "./input";
 
 /** Tongue-weight share bands by trailer type, as ratios. */
@@ -93,7 +94,7 @@ export function derive(rig: RigInput): Derived {
   let payloadSource: Derived["payloadSource"];
   const fromCurb = v.gvwr !== undefined && v.curbWeight !== undefined ? v.gvwr - v.curbWeight : undefined;
   // Go by the lower figure when both the label and GVWR − curb are known.
-  if (v.payloadLabel !== undefined && (fromCurb === undefined || v.payloadLabel <= fromCurb)) {
+  if (v.payloadLabel !== undefined && (fromCurb === undefined || lessOrEqual(v.payloadLabel, fromCurb))) {
     payloadCapacity = v.payloadLabel;
     payloadSource = "label";
   } else if (fromCurb !== undefined) {

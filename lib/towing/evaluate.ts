@@ -53,7 +53,7 @@ function context(rig: RigInput, options: EvaluateOptions | undefined, detail: bo
     u,
     detail,
     tight: typeof t === "number" && Number.isFinite(t) ? Math.min(0.5, Math.max(0, t)) : DEFAULT_TIGHT_MARGIN_RATIO,
-    referenceArm: typeof arm === "number" && Number.isFinite(arm) && arm > 0 ? lengthIn(arm, u) : DEFAULT_REFERENCE_ARM_IN,
+    referenceArm: typeof arm === "number" && Number.isFinite(arm) && arm > 0 ? Math.max(0.1, lengthIn(arm, u)) : DEFAULT_REFERENCE_ARM_IN,
   };
 }
 

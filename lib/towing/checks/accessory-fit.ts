@@ -8,7 +8,7 @@
  * - Ground: height and angle of its lowest point; the angle against the vehicle's departure angle
  *   (Source: 49 CFR 523.2 for the definition; the angle is geometry: atan(h / d)).
  */
-import { EPS, fA, fL, fW, iL, iN, iW, marginL, marginW, NO_STEPS, NO_TEXT, qL, qW, ratioOf, rL, rN, rW, statusOf, worst, type Ctx } from "../context";
+import { EPS, fA, fL, fW, iL, iN, iW, lessThan, marginL, marginW, NO_STEPS, NO_TEXT, qL, qW, ratioOf, rL, rN, rW, statusOf, worst, type Ctx } from "../context";
 import type { Derived } from "../derive";
 import { need } from "../missing";
 import type { AccessoryFitResult, CheckStatus, Margin, MissingField, Quantity, Step } from "../types";
@@ -50,7 +50,7 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
   if (a.loadWeight === undefined) missing.push(need("accessory.loadWeight"));
   if (a.loadCenterFromPin === undefined) missing.push(need("accessory.loadCenterFromPin"));
   let low: [string, string, number] | undefined;
-  for (const l of limits) if (!low || l[2] < low[2]) low = l;
+  for (const l of limits) if (!low || lessThan(l[2], low[2])) low = l;
   const loadPart: Part = { id: "load", label: "Load on the receiver", status: "incomplete" };
   if (d.hitchLoad !== undefined && a.loadCenterFromPin !== undefined) {
     const w = d.hitchLoad;
@@ -182,7 +182,7 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
   if (status !== "over" && missing.length) status = "incomplete";
   let gov: Part | undefined;
   let best = Infinity;
-  for (const p of parts) if (p.margin && p.margin.ratio < best) (best = p.margin.ratio), (gov = p);
+  for (const p of parts) if (p.margin && lessThan(p.margin.ratio, best)) (best = p.margin.ratio), (gov = p);
   const result: AccessoryFitResult = {
     id: "accessory-fit",
     title: "Accessory fit",

@@ -3,7 +3,7 @@
  * a vehicle with wheelbase WB lifts P·OH/WB off the front axle and puts P·(WB + OH)/WB on the rear axle.
  * Each axle is compared with its GAWR; the front axle with the larger of its unhitched and hitched loads.
  */
-import { fP, fW, govW, iL, iW, marginW, NO_STEPS, NO_TEXT, qW, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
+import { fP, fW, govW, iL, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
 import type { Derived } from "../derive";
 import { need } from "../missing";
 import type { AxleLoadsResult, CheckStatus, MissingField, Step } from "../types";
@@ -113,7 +113,7 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
         if (limit === undefined) continue;
         statuses.push(statusOf(actual, limit, c.tight));
         const ratio = ratioOf(actual, limit);
-        if (ratio < bestRatio) {
+        if (lessThan(ratio, bestRatio)) {
           bestRatio = ratio;
           result.actual = qW(c, actual);
           result.limit = qW(c, limit);

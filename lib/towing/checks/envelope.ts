@@ -6,7 +6,7 @@
  *   s_min · G ≤ T ≤ s_max · G (the tongue-weight band).
  * Physics: the region is the intersection of half-planes; its corners are found in closed form.
  */
-import { EPS, fW, iL, iN, iW, NO_STEPS, NO_TEXT, qW, rW, statusOf, withMissing, worst, type Ctx } from "../context";
+import { EPS, fW, iL, iN, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, rW, statusOf, withMissing, worst, type Ctx } from "../context";
 import type { Derived } from "../derive";
 import { need } from "../missing";
 import type { CheckStatus, EnvelopeLine, EnvelopeResult, MissingField, Step } from "../types";
@@ -40,14 +40,19 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
   }
   // Payload left for the tongue
   let payloadRoom: number | undefined;
-  if (d.weighedTotal !== undefined && v.gvwr !== undefined) payloadRoom = v.gvwr - d.weighedTotal;
-  else if (d.payloadCapacity !== undefined && rig.load?.occupants !== undefined && rig.load?.cargo !== undefined)
+  let payloadBase = 0;
+  if (d.weighedTotal !== undefined && v.gvwr !== undefined) {
+    payloadBase = v.gvwr;
+    payloadRoom = v.gvwr - d.weighedTotal;
+  } else if (d.payloadCapacity !== undefined && rig.load?.occupants !== undefined && rig.load?.cargo !== undefined) {
+    payloadBase = d.payloadCapacity;
     payloadRoom = d.payloadCapacity - rig.load.occupants - rig.load.cargo - d.hardware;
+  }
   if (payloadRoom === undefined) missing.push(need(d.payloadCapacity === undefined ? "vehicle.gvwr" : "load.cargo"));
   else {
     bounds.push({ id: "payload", label: "Payload left", on: "T", value: payloadRoom });
     if (c.detail)
-      steps.push({ id: "payload-room", title: "Payload left for the tongue", formulaWords: "Payload capacity minus occupants, cargo and hitch hardware", formula: "P_cap - W_load", inputs: [iW(c, "P_cap", "Payload capacity (or GVWR)", d.weighedTotal !== undefined ? v.gvwr! : d.payloadCapacity!), iW(c, "W_load", "Already aboard", (d.weighedTotal !== undefined ? v.gvwr! : d.payloadCapacity!) - payloadRoom)], result: rW(c, "T_payload", payloadRoom) });
+      steps.push({ id: "payload-room", title: "Payload left for the tongue", formulaWords: "Payload capacity minus occupants, cargo and hitch hardware", formula: "P_cap - W_load", inputs: [iW(c, "P_cap", "Payload capacity (or GVWR)", payloadBase), iW(c, "W_load", "Already aboard", payloadBase - payloadRoom)], result: rW(c, "T_payload", payloadRoom) });
   }
   // Rear GAWR
   const aw = v.axleWeights;
@@ -67,8 +72,8 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
   let gBound: Bound | undefined;
   let tBound: Bound | undefined;
   for (const b of bounds) {
-    if (b.on === "G" && b.value < gMax) (gMax = b.value), (gBound = b);
-    if (b.on === "T" && b.value < tMax) (tMax = b.value), (tBound = b);
+    if (b.on === "G" && lessThan(b.value, gMax)) (gMax = b.value), (gBound = b);
+    if (b.on === "T" && lessThan(b.value, tMax)) (tMax = b.value), (tBound = b);
   }
   const lo = band.min;
   const hi = band.max;
@@ -96,7 +101,7 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
     // Largest G: the GTW limit, or where the lowest share meets the TW limit.
     const gx = Math.max(0, Math.min(gMax, tMax / lo));
     const tx = Math.max(0, Math.min(tMax, hi * gx));
-    const byBand = tMax / lo < gMax;
+    const byBand = lessThan(tMax / lo, gMax);
     result.maxGrossTrailerWeight = qW(c, gx);
     result.maxTongueWeight = qW(c, tx);
     // Binding first along the trailer's own share (or the middle of the band).
@@ -105,7 +110,7 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
     let gAt = Infinity;
     for (const b of bounds) {
       const g = b.on === "G" ? b.value : b.value / share;
-      if (g < gAt) (gAt = g), (bind = b);
+      if (lessThan(g, gAt)) (gAt = g), (bind = b);
     }
     if (bind) result.binding = { id: bind.id, label: bind.label, value: bind.value * wf, unit: c.u.weight };
     if (gx > EPS) {
@@ -142,7 +147,7 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
       statuses.push(statusOf(d.gtw, gx, c.tight));
       result.actual = qW(c, d.gtw);
       result.limit = qW(c, gx);
-      result.margin = { value: (gx - d.gtw) * wf, unit: c.u.weight, ratio: gx > 0 ? (gx - d.gtw) / gx : -1 };
+      result.margin = marginW(c, d.gtw, gx);
       result.governing = { id: (byBand ? tBound : gBound).id, label: (byBand ? tBound : gBound).label, value: (byBand ? tMax : gMax) * wf, unit: c.u.weight };
     }
     if (d.tw !== undefined) statuses.push(statusOf(d.tw, tx, c.tight));

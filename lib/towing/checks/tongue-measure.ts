@@ -2,7 +2,7 @@
  * Check 3, tongue-weight measuring: works out the tongue weight from the rig's measurements (scale, beam or
  * public scale) and says whether the figure the checks use was weighed.
  */
-import { fP, fW, NO_STEPS, NO_TEXT, qW, type Ctx } from "../context";
+import { EPS, fP, fW, NO_STEPS, NO_TEXT, qW, type Ctx } from "../context";
 import type { Derived } from "../derive";
 import { tongueWeightByBeam, tongueWeightByPublicScale, tongueWeightByScale } from "../measure";
 import { need } from "../missing";
@@ -36,10 +36,10 @@ export function checkTongueMeasure(d: Derived, c: Ctx): TongueMeasureResult | nu
       // The entered figure and the measurement should agree; a gap beyond the tight threshold is flagged.
       const gap = Math.abs(entered - measured);
       const ref = Math.max(entered, measured);
-      const ratio = ref > 0 ? gap / ref : 0;
+      const ratio = gap <= EPS * Math.max(1, ref) ? 0 : gap / ref;
       result.limit = qW(c, entered);
       result.margin = { value: weightOut(entered - measured, c.u), unit: c.u.weight, ratio: 1 - ratio };
-      if (ratio > c.tight) result.status = "tight";
+      if (ratio > c.tight + EPS) result.status = "tight";
     }
   } else if (entered !== undefined && t.tongueWeightBasis !== "estimated") {
     result.method = "entered";

@@ -4,7 +4,7 @@
  * - level: the same, raised to at least "tight" when any check is incomplete, so a rig never reads "within"
  *   only because data is missing. `complete` and `incomplete` say which checks lack data.
  */
-import { fP, NO_TEXT, type Ctx } from "../context";
+import { fP, lessThan, NO_TEXT, type Ctx } from "../context";
 import type { AnyCheckResult, CheckId, Governing, VerdictAction, VerdictLevel, VerdictResult } from "../types";
 
 /** Cautions every verdict carries. */
@@ -25,7 +25,7 @@ export function buildVerdict(checks: AnyCheckResult[], c: Ctx): VerdictResult {
     if (ch.status === "incomplete") incomplete.push(ch.id);
     else if (ch.status === "over") checked = "over";
     else if (ch.status === "tight" && checked === "within") checked = "tight";
-    if (ch.governing && ch.margin && ch.status !== "incomplete" && ch.margin.ratio < best) {
+    if (ch.governing && ch.margin && ch.status !== "incomplete" && lessThan(ch.margin.ratio, best)) {
       best = ch.margin.ratio;
       governing = { ...ch.governing, checkId: ch.id };
     }

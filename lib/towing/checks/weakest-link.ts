@@ -7,6 +7,7 @@ import {
   fW,
   govW,
   iW,
+  lessThan,
   marginW,
   NO_STEPS,
   NO_TEXT,
@@ -104,7 +105,7 @@ export function ratingSet(d: Derived): RatingSet {
 
 function lowest(entries: RatingEntry[]): RatingEntry | undefined {
   let low: RatingEntry | undefined;
-  for (const e of entries) if (!low || e.rating < low.rating) low = e;
+  for (const e of entries) if (!low || lessThan(e.rating, low.rating)) low = e;
   return low;
 }
 
@@ -136,7 +137,7 @@ export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
         link.margin = marginW(c, actual, e.rating);
         link.status = statusOf(actual, e.rating, c.tight);
         statuses.push(link.status);
-        if (link.margin.ratio < bestRatio) {
+        if (lessThan(link.margin.ratio, bestRatio)) {
           bestRatio = link.margin.ratio;
           governing = govW(c, e.id, e.label, e.rating);
           govActual = actual;

@@ -5,7 +5,7 @@
  * Also: axle loads with WD, and whether WD is required (the vehicle's threshold, or the weight-carrying
  * ratings exceeded) or advisable (the weight-carrying ratings are tight).
  */
-import { EPS, fL, fP, fW, iL, iN, iW, lessOrEqual, NO_STEPS, NO_TEXT, qL, qP, qW, rL, rN, rW, statusOf, type Ctx } from "../context";
+import { EPS, fL, govW, marginW, ratioOf, fP, fW, iL, iN, iW, lessOrEqual, lessThan, NO_STEPS, NO_TEXT, qL, qP, qW, rL, rN, rW, statusOf, type Ctx } from "../context";
 import type { Derived } from "../derive";
 import { need } from "../missing";
 import type { AxleLoads, CheckStatus, MissingField, Step, WeightDistributionResult } from "../types";
@@ -86,8 +86,8 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
       const st = statusOf(actual, item[2], c.tight);
       if (st === "over") required = true;
       if (st === "tight") advisable = true;
-      const ratio = item[2] > 0 ? (item[2] - actual) / item[2] : -1;
-      if (ratio < worstRatio) {
+      const ratio = ratioOf(actual, item[2]);
+      if (lessThan(ratio, worstRatio)) {
         worstRatio = ratio;
         gov = item;
         govActual = actual;
@@ -121,8 +121,8 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
     if (gov) {
       result.actual = qW(c, govActual);
       result.limit = qW(c, gov[2]);
-      result.margin = { value: (gov[2] - govActual) * c.u.weightFactor, unit: c.u.weight, ratio: worstRatio };
-      result.governing = { id: gov[0], label: gov[1], value: gov[2] * c.u.weightFactor, unit: c.u.weight };
+      result.margin = marginW(c, govActual, gov[2]);
+      result.governing = govW(c, gov[0], gov[1], gov[2]);
     }
   } else {
     if (wd?.fenderUnhitched === undefined) missing.push(need("weightDistribution.fenderUnhitched"));

@@ -1,0 +1,242 @@
+/**
+ * Property-based tests over the whole valid input space (ranges from FIELD_RANGES).
+ */
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import {
+  ACCESSORY_TYPES,
+  BALL_SIZES,
+  BRAKE_TYPES,
+  convertRig,
+  evaluateRig,
+  evaluateRigFast,
+  FIELD_RANGES,
+  parseRig,
+  RECEIVER_SIZES,
+  TRAILER_TYPES,
+  type CheckStatus,
+  type RigInput,
+  type RigResult,
+  type WeakestLinkResult,
+} from "@/lib/towing";
+
+/** Runs per property; raise it with TOWING_PROPERTY_RUNS for a deeper search. */
+const RUNS = Number(process.env.TOWING_PROPERTY_RUNS ?? 250);
+
+/** A number in the field's valid (imperial) range, whole numbers often so that limits are hit exactly. */
+function num(path: string) {
+  const r = FIELD_RANGES[path];
+  if (!r) throw new Error(`no range for ${path}`);
+  return fc.oneof(
+    fc.integer({ min: Math.ceil(r.min), max: Math.floor(r.max) }),
+    fc.double({ min: r.min, max: r.max, noNaN: true, noDefaultInfinity: true }),
+  );
+}
+const opt = <T>(a: fc.Arbitrary<T>) => fc.option(a, { nil: undefined, freq: 4 });
+const o = (path: string) => opt(num(path));
+const pair = (path: string) => opt(fc.record({ front: num(`${path}.front`), rear: num(`${path}.rear`) }));
+
+const vehicle = fc.record({
+  towRating: o("vehicle.towRating"),
+  towRatingWd: o("vehicle.towRatingWd"),
+  tongueWeightLimit: o("vehicle.tongueWeightLimit"),
+  tongueWeightLimitWd: o("vehicle.tongueWeightLimitWd"),
+  gvwr: o("vehicle.gvwr"),
+  curbWeight: o("vehicle.curbWeight"),
+  payloadLabel: o("vehicle.payloadLabel"),
+  gcwr: o("vehicle.gcwr"),
+  gawrFront: o("vehicle.gawrFront"),
+  gawrRear: o("vehicle.gawrRear"),
+  axleWeights: pair("vehicle.axleWeights"),
+  axleWeightsHitched: opt(pair("vehicle.axleWeightsHitched")).map((x) => x ?? undefined),
+  wheelbase: o("vehicle.wheelbase"),
+  rearAxleToHitch: o("vehicle.rearAxleToHitch"),
+  wdRequiredAbove: o("vehicle.wdRequiredAbove"),
+  departureAngle: o("vehicle.departureAngle"),
+  tongueShareBand: opt(
+    fc.tuple(fc.integer({ min: 1, max: 29 }), fc.integer({ min: 1, max: 10 })).map(([min, w]) => ({ min, max: Math.min(40, min + w) })),
+  ),
+});
+const hitch = opt(
+  fc.record({
+    class: opt(fc.integer({ min: 1, max: 5 })),
+    receiverSize: opt(fc.constantFrom(...RECEIVER_SIZES)),
+    gtwRating: o("hitch.gtwRating"),
+    twRating: o("hitch.twRating"),
+    gtwRatingWd: o("hitch.gtwRatingWd"),
+    twRatingWd: o("hitch.twRatingWd"),
+    receiverHeight: o("hitch.receiverHeight"),
+    pinToFascia: o("hitch.pinToFascia"),
+  }),
+);
+const trailer = fc.record({
+  type: fc.constantFrom(...TRAILER_TYPES),
+  grossTrailerWeight: o("trailer.grossTrailerWeight"),
+  tongueWeight: o("trailer.tongueWeight"),
+  tongueWeightBasis: opt(fc.constantFrom("measured" as const, "estimated" as const)),
+  tongueMeasurement: opt(
+    fc.record({
+      scaleReading: num("trailer.tongueMeasurement.scaleReading"),
+      blockToJack: o("trailer.tongueMeasurement.blockToJack"),
+      jackToScale: o("trailer.tongueMeasurement.jackToScale"),
+    }),
+  ),
+  couplerHeight: o("trailer.couplerHeight"),
+  couplerRating: o("trailer.couplerRating"),
+  couplerBallSize: opt(fc.constantFrom(...BALL_SIZES)),
+  ballSize: opt(fc.constantFrom(...BALL_SIZES)),
+  ballRating: o("trailer.ballRating"),
+  brakes: opt(fc.constantFrom(...BRAKE_TYPES)),
+  safetyChainRating: o("trailer.safetyChainRating"),
+});
+const accessory = fc.record({
+  type: fc.constantFrom(...ACCESSORY_TYPES),
+  weight: o("accessory.weight"),
+  loadWeight: o("accessory.loadWeight"),
+  loadCenterFromPin: o("accessory.loadCenterFromPin"),
+  foldClearance: o("accessory.foldClearance"),
+  lowestPointBelowShankTop: o("accessory.lowestPointBelowShankTop"),
+  lowestPointBehindPin: o("accessory.lowestPointBehindPin"),
+  shankRise: o("accessory.shankRise"),
+});
+const rigArb: fc.Arbitrary<RigInput> = fc
+  .record({
+    vehicle,
+    hitch,
+    hitched: fc.oneof(fc.record({ trailer }), fc.record({ accessory }), fc.constant({})),
+    ballMount: opt(
+      fc.record({
+        gtwRating: o("ballMount.gtwRating"),
+        twRating: o("ballMount.twRating"),
+        drop: o("ballMount.drop"),
+        length: o("ballMount.length"),
+        squatAllowance: o("ballMount.squatAllowance"),
+      }),
+    ),
+    extender: opt(fc.record({ length: num("extender.length"), twRating: o("extender.twRating") })),
+    weightDistribution: opt(
+      fc.record({
+        used: fc.boolean(),
+        tongueRating: o("weightDistribution.tongueRating"),
+        fenderUnhitched: o("weightDistribution.fenderUnhitched"),
+        fenderHitched: o("weightDistribution.fenderHitched"),
+        fenderWithWd: o("weightDistribution.fenderWithWd"),
+        restorationTarget: o("weightDistribution.restorationTarget"),
+      }),
+    ),
+    load: opt(fc.record({ occupants: o("load.occupants"), cargo: o("load.cargo"), hitchHardware: o("load.hitchHardware") })),
+  })
+  .map(({ hitched, ...rest }) => {
+    const parsed = parseRig({ units: "imperial", ...rest, ...hitched });
+    if (!parsed.ok) throw new Error("generator made an invalid rig: " + JSON.stringify(parsed.fieldErrors));
+    return parsed.rig;
+  });
+
+function nonFinitePaths(value: unknown, path = "", out: string[] = []): string[] {
+  if (typeof value === "number") {
+    if (!Number.isFinite(value)) out.push(path);
+  } else if (Array.isArray(value)) value.forEach((v, i) => nonFinitePaths(v, `${path}[${i}]`, out));
+  else if (value && typeof value === "object") for (const [k, v] of Object.entries(value)) nonFinitePaths(v, path ? `${path}.${k}` : k, out);
+  return out;
+}
+
+const RANK: Record<CheckStatus, number> = { within: 0, tight: 1, incomplete: 2, over: 3 };
+const statuses = (r: RigResult) => Object.fromEntries(r.checks.map((c) => [c.id, c.status]));
+
+describe("properties over the valid input space", () => {
+  it("nothing throws and no NaN or Infinity escapes", () => {
+    fc.assert(
+      fc.property(rigArb, fc.double({ min: 0, max: 0.5, noNaN: true }), (rig, tight) => {
+        for (const r of [rig, convertRig(rig, "metric")]) {
+          const full = evaluateRig(r, { tightMarginRatio: tight });
+          expect(nonFinitePaths(full)).toEqual([]);
+          expect(nonFinitePaths(evaluateRigFast(r))).toEqual([]);
+          expect(full.verdict.cautions.length).toBeGreaterThanOrEqual(5);
+          for (const c of full.checks) expect(c.cautions.length).toBeGreaterThan(0);
+        }
+      }),
+      { numRuns: RUNS },
+    );
+  });
+
+  it("the governing link is the lowest rating present", () => {
+    fc.assert(
+      fc.property(rigArb, (rig) => {
+        const wl = evaluateRig(rig).checks.find((c) => c.id === "weakest-link") as WeakestLinkResult | undefined;
+        if (!wl) return;
+        const gtw = wl.links.filter((l) => l.limits === "gross-trailer-weight").map((l) => l.rating.value);
+        const tw = wl.links.filter((l) => l.limits === "tongue-weight").map((l) => l.rating.value);
+        // The lowest, up to one part in 10^9 (near-ties resolve by the order of the links, the same in both unit systems).
+        const same = (a: number | undefined, b: number) => Math.abs((a ?? Number.NaN) - b) <= Math.max(1e-9, 1e-9 * Math.abs(b));
+        if (gtw.length) expect(same(wl.governingGrossTrailerWeight?.value, Math.min(...gtw))).toBe(true);
+        if (tw.length) expect(same(wl.governingTongueWeight?.value, Math.min(...tw))).toBe(true);
+      }),
+      { numRuns: RUNS },
+    );
+  });
+
+  it("adding cargo to the vehicle never improves a status", () => {
+    fc.assert(
+      fc.property(rigArb, fc.integer({ min: 1, max: 5000 }), (rig, extra) => {
+        const cargo = rig.load?.cargo ?? 0;
+        const heavier = parseRig({ ...rig, load: { ...rig.load, cargo: Math.min(20000, cargo + extra) } });
+        if (!heavier.ok) throw new Error("invalid");
+        const base = { ...rig, load: { ...rig.load, cargo } };
+        const a = evaluateRig(base);
+        const b = evaluateRig(heavier.rig);
+        const sa = statuses(a);
+        const sb = statuses(b);
+        for (const id of Object.keys(sa)) expect(RANK[sb[id]!], id).toBeGreaterThanOrEqual(RANK[sa[id]!]);
+        expect(RANK[b.verdict.level]).toBeGreaterThanOrEqual(RANK[a.verdict.level]);
+      }),
+      { numRuns: RUNS },
+    );
+  });
+
+  it("a heavier trailer with the same tongue share never improves a status", () => {
+    fc.assert(
+      fc.property(rigArb, fc.double({ min: 1, max: 3, noNaN: true }), (rig, k) => {
+        const t = rig.trailer;
+        fc.pre(!!t && t.grossTrailerWeight !== undefined && t.tongueWeight !== undefined);
+        const g = t!.grossTrailerWeight! * k;
+        const w = t!.tongueWeight !== undefined ? t!.tongueWeight * k : undefined;
+        fc.pre(g <= 30000 && (w === undefined || w <= 6000));
+        const heavier = parseRig({ ...rig, trailer: { ...t, grossTrailerWeight: g, tongueWeight: w } });
+        if (!heavier.ok) throw new Error("invalid");
+        const sa = statuses(evaluateRig(rig));
+        const sb = statuses(evaluateRig(heavier.rig));
+        // The share itself does not change; the measuring check compares with a separate measurement.
+        for (const id of Object.keys(sa)) {
+          if (id === "tongue-measure") continue;
+          if (id === "tongue-share") expect(sb[id]).toBe(sa[id]);
+          else expect(RANK[sb[id]!], id).toBeGreaterThanOrEqual(RANK[sa[id]!]);
+        }
+      }),
+      { numRuns: RUNS },
+    );
+  });
+
+  it("imperial and metric input of one rig agree", () => {
+    fc.assert(
+      fc.property(rigArb, (rig) => {
+        const imp = evaluateRig(rig);
+        const metricRig = convertRig(rig, "metric");
+        expect(parseRig(metricRig).ok).toBe(true);
+        const met = evaluateRig(metricRig);
+        expect(met.units).toBe("metric");
+        expect(statuses(met)).toEqual(statuses(imp));
+        expect(met.verdict.level).toBe(imp.verdict.level);
+        expect(met.verdict.incomplete).toEqual(imp.verdict.incomplete);
+        expect(met.verdict.governing?.id).toBe(imp.verdict.governing?.id);
+        expect(met.notApplicable).toEqual(imp.notApplicable);
+        for (let i = 0; i < imp.checks.length; i++) {
+          const a = imp.checks[i]!;
+          const b = met.checks[i]!;
+          expect(b.governing?.id).toBe(a.governing?.id);
+          if (a.margin && b.margin) expect(b.margin.ratio).toBeCloseTo(a.margin.ratio, 6);
+        }
+      }),
+      { numRuns: RUNS },
+    );
+  });
+});

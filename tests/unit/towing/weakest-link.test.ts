@@ -1,0 +1,91 @@
+import { describe, expect, it } from "vitest";
+import { convertRig, evaluateRig, KG_PER_LB, type WeakestLinkResult } from "@/lib/towing";
+import { CLASS_MAX_GTW } from "@/lib/towing/checks/weakest-link";
+import { check, pickupRig } from "./helpers";
+
+const wl = (r: ReturnType<typeof pickupRig>) => check<WeakestLinkResult>(evaluateRig(r), "weakest-link");
+
+describe("weakest link", () => {
+  it("names the class 3 receiver as the governing gross-weight link", () => {
+    const res = wl(pickupRig());
+    // Common practice, no published source: a class 3 receiver rated 4,500 lb gross trailer weight
+    expect(res.governingGrossTrailerWeight?.value).toBe(4500);
+    expect(res.governingGrossTrailerWeight?.id).toBe("hitch.gtwRating");
+    // Common practice, no published source: its tongue rating 675 lb (15 % of 4,500 lb)
+    expect(res.governingTongueWeight?.value).toBe(675);
+    expect(675 / 4500).toBeCloseTo(0.15, 10); // Common practice, no published source: 675 lb is 15 % of 4,500 lb
+    // Physics: arithmetic, 4,500 − 4,000 = 500 lb left, 11.1 % of the rating
+    const hitchLink = res.links.find((l) => l.id === "hitch.gtwRating")!;
+    expect(hitchLink.margin?.value).toBeCloseTo(500, 9);
+    expect(hitchLink.margin?.ratio).toBeCloseTo(500 / 4500, 12);
+    expect(res.status).toBe("within");
+  });
+
+  it("raises the receiver's gross rating to 5,000 lb with weight distribution while the tongue rating stays 675 lb", () => {
+    const withWd = wl(pickupRig({ trailer: { grossTrailerWeight: 4800, tongueWeight: 600 }, weightDistribution: { used: true, tongueRating: 1000 } }));
+    // Common practice, no published source: class 3 receiver, 5,000 lb gross with weight distribution
+    expect(withWd.links.find((l) => l.id === "hitch.gtwRatingWd")?.rating.value).toBe(5000);
+    // Common practice, no published source: the tongue rating stays 675 lb with weight distribution
+    expect(withWd.links.find((l) => l.id === "hitch.twRatingWd")?.rating.value).toBe(675);
+    expect(withWd.links.find((l) => l.id === "hitch.gtwRatingWd")?.status).toBe("tight"); // 200 lb of 5,000 lb is 4 %
+    const noWd = wl(pickupRig({ trailer: { grossTrailerWeight: 4800, tongueWeight: 600 } }));
+    // Common practice, no published source: 4,800 lb is over the 4,500 lb weight-carrying rating
+    expect(noWd.status).toBe("over");
+    expect(noWd.links.find((l) => l.id === "hitch.gtwRating")?.status).toBe("over");
+  });
+
+  it("goes by the lowest of the vehicle's and the hitch's numbers", () => {
+    const res = wl(pickupRig({ vehicle: { towRating: 3500, tongueWeightLimit: 350 }, trailer: { grossTrailerWeight: 3000, tongueWeight: 330 } }));
+    // Common practice, no published source: go by the lowest of the vehicle's and the hitch's numbers
+    expect(res.governingGrossTrailerWeight?.id).toBe("vehicle.towRating");
+    expect(res.governingGrossTrailerWeight?.value).toBe(3500);
+    expect(res.governingTongueWeight?.value).toBe(350);
+    // Source: Washington WAC 204-70-060 (the weakest component governs): 20 lb of 350 lb left is tight
+    expect(res.governing?.id).toBe("vehicle.tongueWeightLimit");
+    expect(res.status).toBe("tight");
+  });
+
+  it("requires each safety chain to be rated for the gross trailer weight", () => {
+    const res = wl(pickupRig({ hitch: { gtwRating: 10000, gtwRatingWd: 10000, twRating: 1000, twRatingWd: 1000 }, trailer: { grossTrailerWeight: 5200, tongueWeight: 600, safetyChainRating: 5000 } }));
+    // Source: Washington WAC 204-70-070; New Hampshire RSA 266:63 — each chain at least the gross trailer weight
+    expect(res.links.find((l) => l.id === "trailer.safetyChainRating")?.status).toBe("over");
+    expect(res.status).toBe("over");
+  });
+
+  it("knows the hitch classes' maximum trailer weights", () => {
+    // Source: New York 15 NYCRR 57.3(c) (adopts SAE J684); Ontario Ministry of Transportation
+    expect(CLASS_MAX_GTW[1]).toBe(2000);
+    expect(CLASS_MAX_GTW[2]).toBe(3500); // Source: New York 15 NYCRR 57.3(c) (adopts SAE J684)
+    expect(CLASS_MAX_GTW[3]).toBe(5000); // Source: New York 15 NYCRR 57.3(c) (adopts SAE J684)
+    expect(CLASS_MAX_GTW[4]).toBe(10000); // Source: New York 15 NYCRR 57.3(c) (adopts SAE J684)
+    const res = wl(pickupRig({ hitch: { class: 2, gtwRating: 6000, twRating: 700 }, trailer: { grossTrailerWeight: 3600 } }));
+    expect(res.cautions.some((t) => t.includes("class 2") && t.includes("3,500 lb"))).toBe(true);
+  });
+
+  it("flags a ball that does not match the coupler", () => {
+    const res = wl(pickupRig({ trailer: { ballSize: "1-7/8", couplerBallSize: "2" } }));
+    // Common practice, no published source: the ball must match the coupler's size
+    expect(res.status).toBe("over");
+    expect(res.advice[0]).toContain("2 in ball");
+  });
+
+  it("reports missing ratings and where to find them, but keeps a known over", () => {
+    const missing = wl(pickupRig({ hitch: { gtwRating: undefined, gtwRatingWd: undefined, class: 3 } }));
+    expect(missing.status).toBe("incomplete");
+    expect(missing.missing?.find((m) => m.field === "hitch.gtwRating")?.where).toContain("Hitch label");
+    const over = wl(pickupRig({ hitch: { gtwRating: undefined, gtwRatingWd: undefined }, vehicle: { towRating: 3000 } }));
+    expect(over.status).toBe("over");
+  });
+
+  it("gives the same links in kilograms", () => {
+    const r = pickupRig();
+    const imp = wl(r);
+    const met = wl(convertRig(r, "metric"));
+    expect(met.governingGrossTrailerWeight?.id).toBe(imp.governingGrossTrailerWeight?.id);
+    // Source: exact definition of the pound, 0.45359237 kg (From memory: international yard and pound agreement, 1959)
+    expect(met.governingGrossTrailerWeight?.value).toBeCloseTo(4500 * 0.45359237, 9);
+    expect(met.governingGrossTrailerWeight?.unit).toBe("kg");
+    expect(met.margin?.value).toBeCloseTo(imp.margin!.value * KG_PER_LB, 9);
+    expect(met.status).toBe(imp.status);
+  });
+});
