@@ -121,3 +121,84 @@ export type User = typeof users.$inferSelect;
 export type Organisation = typeof organisations.$inferSelect;
 export type Membership = typeof memberships.$inferSelect;
 export type Invitation = typeof invitations.$inferSelect;
+
+/**
+ * Profiles: the parts of a rig a shop or fleet keeps to pick again. `data` holds the core's own input
+ * shapes (lib/towing/input.ts) in the profile's unit system, so a profile drops straight into a check.
+ */
+const profileColumns = () => ({
+  id: text("id").primaryKey(),
+  organisationId: text("organisation_id")
+    .notNull()
+    .references(() => organisations.id, { onDelete: "cascade" }),
+  name: text("name").notNull(),
+  units: text("units", { enum: ["imperial", "metric"] }).notNull(),
+  data: text("data", { mode: "json" }).notNull(),
+  archivedAt: integer("archived_at", { mode: "timestamp_ms" }),
+  createdAt: timestampNow(),
+  updatedAt: timestampNow("updated_at"),
+});
+
+export const vehicleProfiles = sqliteTable("vehicle_profiles", profileColumns(), (table) => [
+  index("vehicle_profiles_org_idx").on(table.organisationId),
+]);
+export const trailerProfiles = sqliteTable("trailer_profiles", profileColumns(), (table) => [
+  index("trailer_profiles_org_idx").on(table.organisationId),
+]);
+export const accessoryProfiles = sqliteTable("accessory_profiles", profileColumns(), (table) => [
+  index("accessory_profiles_org_idx").on(table.organisationId),
+]);
+
+/**
+ * A saved check: an immutable snapshot of the inputs and the results, with the core version that computed
+ * them. Never updated; "duplicate" starts a new check from its inputs.
+ */
+export const savedChecks = sqliteTable(
+  "saved_checks",
+  {
+    id: text("id").primaryKey(),
+    organisationId: text("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    createdByUserId: text("created_by_user_id").references(() => users.id, { onDelete: "set null" }),
+    customerName: text("customer_name"),
+    note: text("note"),
+    /** What the list shows and filters by: the vehicle profile's name or the rig's own name. */
+    vehicleLabel: text("vehicle_label"),
+    hitchedLabel: text("hitched_label"),
+    level: text("level", { enum: ["within", "tight", "over"] }).notNull(),
+    complete: integer("complete", { mode: "boolean" }).notNull(),
+    units: text("units", { enum: ["imperial", "metric"] }).notNull(),
+    rig: text("rig", { mode: "json" }).notNull(),
+    result: text("result", { mode: "json" }).notNull(),
+    coreVersion: text("core_version").notNull(),
+    createdAt: timestampNow(),
+  },
+  (table) => [index("saved_checks_org_created_idx").on(table.organisationId, table.createdAt)],
+);
+
+/** A customer's read-only link to one saved check. Only the token's SHA-256 is kept. */
+export const shareLinks = sqliteTable(
+  "share_links",
+  {
+    id: text("id").primaryKey(),
+    organisationId: text("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    savedCheckId: text("saved_check_id")
+      .notNull()
+      .references(() => savedChecks.id, { onDelete: "cascade" }),
+    tokenHash: text("token_hash").notNull().unique(),
+    /** The token's last characters, so staff can tell links apart without the link itself being stored. */
+    tokenHint: text("token_hint").notNull(),
+    createdByUserId: text("created_by_user_id").references(() => users.id, { onDelete: "set null" }),
+    expiresAt: integer("expires_at", { mode: "timestamp_ms" }),
+    revokedAt: integer("revoked_at", { mode: "timestamp_ms" }),
+    lastOpenedAt: integer("last_opened_at", { mode: "timestamp_ms" }),
+    createdAt: timestampNow(),
+  },
+  (table) => [index("share_links_check_idx").on(table.savedCheckId)],
+);
+
+export type SavedCheck = typeof savedChecks.$inferSelect;
+export type ShareLink = typeof shareLinks.$inferSelect;

@@ -25,6 +25,8 @@ export const PERMISSIONS = {
   "mailbox.read": ["owner"],
   "checks.run": ["owner", "staff", "fleet_manager", "trainer"],
   "checks.save": ["owner", "staff", "fleet_manager"],
+  /** Saving a typed vehicle as a profile from the check screen (editing and archiving is fleet.edit). */
+  "profiles.save": ["owner", "staff", "fleet_manager"],
   "fleet.read": ["owner", "staff", "fleet_manager", "trainer"],
   "fleet.edit": ["owner", "fleet_manager"],
   "training.author": ["owner", "trainer"],

@@ -14,3 +14,8 @@ export function hashToken(token: string): string {
 export function newId(): string {
   return randomBytes(15).toString("base64url");
 }
+
+/** A customer's result link token: 192 random bits, URL-safe (32 characters). */
+export function newShareToken(): string {
+  return randomBytes(24).toString("base64url");
+}
