@@ -32,15 +32,12 @@ export function qP(ratio: number): Quantity {
 }
 
 // ---- formatting for sentences (the UI does its own rounding for numbers it shows) ----
+/** A whole number with thousands separators: 12345 → "12,345". */
 function group(n: number): string {
-  const neg = n < 0;
-  let s = String(Math.abs(n));
-  let out = "";
-  while (s.length > 3) {
-    out = "," + s.slice(-3) + out;
-    s = s.slice(0, -3);
-  }
-  return (neg ? "-" : "") + s + out;
+  if (n < 0) return "-" + group(-n);
+  if (n < 1000 || !Number.isFinite(n)) return String(n);
+  const rest = n % 1000;
+  return group(Math.floor(n / 1000)) + (rest < 10 ? ",00" : rest < 100 ? ",0" : ",") + rest;
 }
 export function fW(c: Ctx, lb: number): string {
   return `${group(Math.round(weightOut(lb, c.u)))} ${c.u.weight}`;

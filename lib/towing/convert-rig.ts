@@ -6,20 +6,34 @@ import { FIELD_RANGES, type RigInput } from "./input";
 import { factor, type UnitSystem } from "./units";
 
 type Plain = Record<string, unknown>;
+/** For each key: "mass", "length", or a nested spec for a nested object. Built once from FIELD_RANGES. */
+interface Spec {
+  [key: string]: "mass" | "length" | Spec;
+}
 
-function convertNode(node: Plain, prefix: string, mass: number, length: number): Plain {
+const SPEC: Spec = {};
+for (const [path, range] of Object.entries(FIELD_RANGES)) {
+  if (range.kind !== "mass" && range.kind !== "length") continue;
+  const keys = path.split(".");
+  let node = SPEC;
+  for (let i = 0; i < keys.length - 1; i++) {
+    const k = keys[i]!;
+    const next = node[k];
+    if (typeof next === "object") node = next;
+    else node = node[k] = {};
+  }
+  node[keys[keys.length - 1]!] = range.kind;
+}
+
+function convertNode(node: Plain, spec: Spec, mass: number, length: number): Plain {
   const out: Plain = {};
-  for (const key of Object.keys(node)) {
+  for (const key in node) {
     const value = node[key];
-    const path = prefix ? `${prefix}.${key}` : key;
-    if (typeof value === "number") {
-      const range = FIELD_RANGES[path];
-      out[key] = range?.kind === "mass" ? value * mass : range?.kind === "length" ? value * length : value;
-    } else if (value !== null && typeof value === "object" && !Array.isArray(value)) {
-      out[key] = convertNode(value as Plain, path, mass, length);
-    } else {
-      out[key] = value;
-    }
+    const kind = spec[key];
+    if (typeof value === "number") out[key] = kind === "mass" ? value * mass : kind === "length" ? value * length : value;
+    else if (value !== null && typeof value === "object" && !Array.isArray(value))
+      out[key] = convertNode(value as Plain, typeof kind === "object" ? kind : {}, mass, length);
+    else out[key] = value;
   }
   return out;
 }
@@ -27,12 +41,7 @@ function convertNode(node: Plain, prefix: string, mass: number, length: number):
 /** The same rig expressed in `toUnits` (lb & in, or kg & mm). Returns the rig itself when already there. */
 export function convertRig(rig: RigInput, toUnits: UnitSystem): RigInput {
   if (rig.units === toUnits) return rig;
-  const converted = convertNode(
-    rig as unknown as Plain,
-    "",
-    factor("mass", rig.units, toUnits),
-    factor("length", rig.units, toUnits),
-  );
+  const converted = convertNode(rig as unknown as Plain, SPEC, factor("mass", rig.units, toUnits), factor("length", rig.units, toUnits));
   converted.units = toUnits;
   return converted as unknown as RigInput;
 }

@@ -44,6 +44,8 @@ export interface Derived {
   loadedVehicle?: number;
   /** Rear axle to the point where the hitch load acts. */
   overhang?: number;
+  /** Per-evaluation memo for figures several checks share (rating set, restoration). */
+  cache: { ratingSet?: unknown; wdState?: unknown };
 }
 
 export function derive(rig: RigInput): Derived {
@@ -137,5 +139,6 @@ export function derive(rig: RigInput): Derived {
     weighedTotal,
     loadedVehicle,
     overhang,
+    cache: {},
   };
 }

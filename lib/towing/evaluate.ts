@@ -18,7 +18,7 @@ import { checkTongueShare } from "./checks/tongue-share";
 import { buildVerdict } from "./checks/verdict";
 import { checkWeakestLink } from "./checks/weakest-link";
 import { checkWeightDistribution } from "./checks/weight-distribution";
-import type { AnyCheckResult, CheckId, EvaluateOptions, FastRigResult, RigResult } from "./types";
+import type { AnyCheckResult, CheckId, EvaluateOptions, FastCheck, FastRigResult, RigResult } from "./types";
 import { CHECK_IDS } from "./types";
 import { lengthIn, unitSet } from "./units";
 import { CORE_VERSION } from "./version";
@@ -60,13 +60,17 @@ function context(rig: RigInput, options: EvaluateOptions | undefined, detail: bo
 function run(rig: RigInput, c: Ctx) {
   const d = derive(toCanonical(rig));
   const checks: AnyCheckResult[] = [];
+  const summary: FastCheck[] = [];
   const notApplicable: CheckId[] = [];
-  for (const [id, fn] of CHECKS) {
+  for (let i = 0; i < CHECKS.length; i++) {
+    const [id, fn] = CHECKS[i]!;
     const r = fn(d, c);
-    if (r) checks.push(r);
-    else notApplicable.push(id);
+    if (r) {
+      checks.push(r);
+      summary.push({ id: r.id, status: r.status, margin: r.margin, governing: r.governing });
+    } else notApplicable.push(id);
   }
-  return { checks, notApplicable, verdict: buildVerdict(checks, c) };
+  return { checks, summary, notApplicable, verdict: buildVerdict(summary, checks, c) };
 }
 
 /**
@@ -80,7 +84,7 @@ export function evaluateRig(input: RigInput, options?: EvaluateOptions): RigResu
 
 /** Statuses, margins and governing items without steps or texts: for fleet matrices. */
 export function evaluateRigFast(input: RigInput, options?: EvaluateOptions): FastRigResult {
-  const { checks, verdict } = run(input, context(input, options, false));
+  const { summary, verdict } = run(input, context(input, options, false));
   return {
     coreVersion: CORE_VERSION,
     units: input.units,
@@ -89,7 +93,7 @@ export function evaluateRigFast(input: RigInput, options?: EvaluateOptions): Fas
     complete: verdict.complete,
     incomplete: verdict.incomplete,
     governing: verdict.governing,
-    checks: checks.map((ch) => ({ id: ch.id, status: ch.status, margin: ch.margin, governing: ch.governing })),
+    checks: summary,
   };
 }
 

@@ -21,6 +21,10 @@ export function nearestCommonDrop(dropIn: number): number {
   return dropIn < 0 ? -best : best;
 }
 
+function wordFor(c: Ctx, x: number): string {
+  return x < 0 ? `${fL(c, -x)} rise` : `${fL(c, x)} drop`;
+}
+
 const CAUTIONS = [
   "Measure on level ground with the vehicle loaded as it will travel and the trailer level.",
   "A trailer that rides nose-up or nose-down loads its axles unevenly and can sway or brake badly.",
@@ -85,7 +89,7 @@ export function checkBallMount(d: Derived, c: Ctx): BallMountResult | null {
   result.steps = steps;
   result.cautions = CAUTIONS;
   const advice: string[] = [];
-  const word = (x: number) => (x < 0 ? `${fL(c, -x)} rise` : `${fL(c, x)} drop`);
+  const word = (x: number) => wordFor(c, x);
   if (needed !== undefined && (drop === undefined || !lessOrEqual(Math.abs(drop - needed), LEVEL_TOLERANCE_IN)))
     advice.push(`Use a ball mount with a ${word(nearestCommonDrop(needed))} (nearest common size).`);
   for (const m of missing) advice.push(`${m.what}: ${m.where}.`);

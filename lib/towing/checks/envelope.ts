@@ -89,12 +89,15 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
     cautions: NO_TEXT,
     steps: NO_STEPS,
   };
-  const lines: EnvelopeLine[] = [];
   const wf = c.u.weightFactor;
-  for (const b of bounds) lines.push({ id: b.id, label: b.label, kind: b.on === "G" ? "gtw-max" : "tw-max", value: b.value * wf });
-  lines.push({ id: "band.min", label: "Lowest tongue-weight share", kind: "share-min", slope: lo });
-  lines.push({ id: "band.max", label: "Highest tongue-weight share", kind: "share-max", slope: hi });
-  result.lines = lines;
+  if (c.detail) {
+    // Chart data: only on the full path.
+    const lines: EnvelopeLine[] = [];
+    for (const b of bounds) lines.push({ id: b.id, label: b.label, kind: b.on === "G" ? "gtw-max" : "tw-max", value: b.value * wf });
+    lines.push({ id: "band.min", label: "Lowest tongue-weight share", kind: "share-min", slope: lo });
+    lines.push({ id: "band.max", label: "Highest tongue-weight share", kind: "share-max", slope: hi });
+    result.lines = lines;
+  }
 
   const statuses: CheckStatus[] = [];
   if (gBound && tBound) {
@@ -113,7 +116,7 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
       if (lessThan(g, gAt)) (gAt = g), (bind = b);
     }
     if (bind) result.binding = { id: bind.id, label: bind.label, value: bind.value * wf, unit: c.u.weight };
-    if (gx > EPS) {
+    if (c.detail && gx > EPS) {
       const g1 = Math.min(tMax / hi, gx);
       const pts: Array<[number, number]> = [[0, 0], [g1, hi * g1], [gx, Math.min(hi * gx, tMax)], [gx, lo * gx]];
       const region: EnvelopeResult["region"] = [];

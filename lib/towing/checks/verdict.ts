@@ -5,7 +5,7 @@
  *   only because data is missing. `complete` and `incomplete` say which checks lack data.
  */
 import { fP, lessThan, NO_TEXT, type Ctx } from "../context";
-import type { AnyCheckResult, CheckId, Governing, VerdictAction, VerdictLevel, VerdictResult } from "../types";
+import type { AnyCheckResult, CheckId, FastCheck, Governing, VerdictAction, VerdictLevel, VerdictResult } from "../types";
 
 /** Cautions every verdict carries. */
 export const GENERAL_CAUTIONS = [
@@ -16,20 +16,28 @@ export const GENERAL_CAUTIONS = [
   "Local law and a licensed installer have the last word.",
 ];
 
-export function buildVerdict(checks: AnyCheckResult[], c: Ctx): VerdictResult {
+/**
+ * `summary` holds one uniform record per check (same shape, so this loop stays fast); `checks` the full results,
+ * read only for the texts when the context asks for them.
+ */
+export function buildVerdict(summary: FastCheck[], checks: AnyCheckResult[], c: Ctx): VerdictResult {
   let checked: VerdictLevel = "within";
   const incomplete: CheckId[] = [];
   let best = Infinity;
   let governing: (Governing & { checkId: CheckId }) | undefined;
-  for (const ch of checks) {
+  let govCheck: CheckId | undefined;
+  let govItem: Governing | undefined;
+  for (const ch of summary) {
     if (ch.status === "incomplete") incomplete.push(ch.id);
     else if (ch.status === "over") checked = "over";
     else if (ch.status === "tight" && checked === "within") checked = "tight";
     if (ch.governing && ch.margin && ch.status !== "incomplete" && lessThan(ch.margin.ratio, best)) {
       best = ch.margin.ratio;
-      governing = { ...ch.governing, checkId: ch.id };
+      govItem = ch.governing;
+      govCheck = ch.id;
     }
   }
+  if (govItem && govCheck) governing = { id: govItem.id, label: govItem.label, value: govItem.value, unit: govItem.unit, checkId: govCheck };
   const complete = incomplete.length === 0;
   const level: VerdictLevel = checked === "within" && !complete ? "tight" : checked;
   const verdict: VerdictResult = {

@@ -41,8 +41,12 @@ export interface RatingSet {
 /** Maximum gross trailer weight by hitch class. Source: New York 15 NYCRR 57.3(c) (adopts SAE J684). */
 export const CLASS_MAX_GTW: Record<number, number> = { 1: 2000, 2: 3500, 3: 5000, 4: 10000 };
 
-/** Every rating that limits this rig's trailer, in canonical pounds, with what is missing. */
+/** Every rating that limits this rig's trailer, in canonical pounds, with what is missing (computed once per rig). */
 export function ratingSet(d: Derived): RatingSet {
+  return (d.cache.ratingSet ??= buildRatingSet(d)) as RatingSet;
+}
+
+function buildRatingSet(d: Derived): RatingSet {
   const { rig, wdUsed } = d;
   const v = rig.vehicle;
   const h = rig.hitch;
@@ -109,6 +113,34 @@ function lowest(entries: RatingEntry[]): RatingEntry | undefined {
   return low;
 }
 
+interface LinkAcc {
+  links: Link[];
+  statuses: CheckStatus[];
+  bestRatio: number;
+  governing: Governing | undefined;
+  govActual: number;
+  govLimit: number;
+}
+
+function addLinks(acc: LinkAcc, c: Ctx, entries: RatingEntry[], actual: number | undefined, kind: Link["limits"]): void {
+  for (const e of entries) {
+    const link: Link = { id: e.id, label: e.label, limits: kind, rating: qW(c, e.rating), status: "incomplete" };
+    if (actual !== undefined) {
+      link.actual = qW(c, actual);
+      link.margin = marginW(c, actual, e.rating);
+      link.status = statusOf(actual, e.rating, c.tight);
+      acc.statuses.push(link.status);
+      if (lessThan(link.margin.ratio, acc.bestRatio)) {
+        acc.bestRatio = link.margin.ratio;
+        acc.governing = govW(c, e.id, e.label, e.rating);
+        acc.govActual = actual;
+        acc.govLimit = e.rating;
+      }
+    }
+    acc.links.push(link);
+  }
+}
+
 const CAUTIONS = [
   "Every part between the vehicle and the trailer has its own rating; the lowest one is the limit for the whole rig.",
   "Read the figures from the labels and stamps on the parts themselves; a catalogue figure may differ.",
@@ -123,32 +155,10 @@ export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
   if (d.gtw === undefined) missing.unshift(need("trailer.grossTrailerWeight"));
   if (d.tw === undefined) missing.unshift(need("trailer.tongueWeight"));
 
-  const links: Link[] = [];
-  const statuses: CheckStatus[] = [];
-  let bestRatio = Infinity;
-  let governing: Governing | undefined;
-  let govActual = 0;
-  let govLimit = 0;
-  const addLinks = (entries: RatingEntry[], actual: number | undefined, kind: Link["limits"]) => {
-    for (const e of entries) {
-      const link: Link = { id: e.id, label: e.label, limits: kind, rating: qW(c, e.rating), status: "incomplete" };
-      if (actual !== undefined) {
-        link.actual = qW(c, actual);
-        link.margin = marginW(c, actual, e.rating);
-        link.status = statusOf(actual, e.rating, c.tight);
-        statuses.push(link.status);
-        if (lessThan(link.margin.ratio, bestRatio)) {
-          bestRatio = link.margin.ratio;
-          governing = govW(c, e.id, e.label, e.rating);
-          govActual = actual;
-          govLimit = e.rating;
-        }
-      }
-      links.push(link);
-    }
-  };
-  addLinks(set.gtw, d.gtw, "gross-trailer-weight");
-  addLinks(set.tw, d.tw, "tongue-weight");
+  const acc: LinkAcc = { links: [], statuses: [], bestRatio: Infinity, governing: undefined, govActual: 0, govLimit: 0 };
+  addLinks(acc, c, set.gtw, d.gtw, "gross-trailer-weight");
+  addLinks(acc, c, set.tw, d.tw, "tongue-weight");
+  const { links, statuses, governing, govActual, govLimit } = acc;
 
   // Ball and coupler must be the same size: a mismatch can let the trailer come off.
   const sizeMismatch = t.ballSize !== undefined && t.couplerBallSize !== undefined && t.ballSize !== t.couplerBallSize;

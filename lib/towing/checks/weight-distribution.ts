@@ -22,7 +22,12 @@ export interface WdState {
   targetFenderHeight?: number;
 }
 
+/** Restoration figures of the rig (computed once per rig). */
 export function wdState(d: Derived): WdState {
+  return (d.cache.wdState ??= buildWdState(d)) as WdState;
+}
+
+function buildWdState(d: Derived): WdState {
   const wd = d.rig.weightDistribution;
   const target = wd?.restorationTarget !== undefined ? wd.restorationTarget / 100 : DEFAULT_RESTORATION_TARGET;
   const s: WdState = { target, restorationIsTarget: false };
@@ -50,6 +55,29 @@ export function axlesWithWd(front0: number, rear0: number, tw: number, wheelbase
   return { front: front0 - lost + r * lost, rear: rear0 + tw + lost - r * lost, lost };
 }
 
+interface NeedAcc {
+  required: boolean;
+  advisable: boolean;
+  worstRatio: number;
+  gov: [string, string, number] | undefined;
+  govActual: number;
+}
+
+function consider(acc: NeedAcc, c: Ctx, list: Array<[string, string, number]>, actual: number | undefined): void {
+  if (actual === undefined) return;
+  for (const item of list) {
+    const st = statusOf(actual, item[2], c.tight);
+    if (st === "over") acc.required = true;
+    if (st === "tight") acc.advisable = true;
+    const ratio = ratioOf(actual, item[2]);
+    if (lessThan(ratio, acc.worstRatio)) {
+      acc.worstRatio = ratio;
+      acc.gov = item;
+      acc.govActual = actual;
+    }
+  }
+}
+
 const CAUTIONS = [
   "Weigh the tongue and read the ball's rating with weight distribution released.",
   "Measure fender heights at the same point above the front wheel centre, on level ground, each time.",
@@ -75,27 +103,10 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
   const wcTw: Array<[string, string, number]> = [];
   if (v.tongueWeightLimit !== undefined) wcTw.push(["vehicle.tongueWeightLimit", "Vehicle tongue-weight limit without weight distribution", v.tongueWeightLimit]);
   if (h?.twRating !== undefined) wcTw.push(["hitch.twRating", "Hitch tongue rating without weight distribution", h.twRating]);
-  let required = false;
-  let advisable = false;
-  let worstRatio = Infinity;
-  let gov: [string, string, number] | undefined;
-  let govActual = 0;
-  const consider = (list: Array<[string, string, number]>, actual: number | undefined) => {
-    if (actual === undefined) return;
-    for (const item of list) {
-      const st = statusOf(actual, item[2], c.tight);
-      if (st === "over") required = true;
-      if (st === "tight") advisable = true;
-      const ratio = ratioOf(actual, item[2]);
-      if (lessThan(ratio, worstRatio)) {
-        worstRatio = ratio;
-        gov = item;
-        govActual = actual;
-      }
-    }
-  };
-  consider(wcGtw, gtw);
-  consider(wcTw, tw);
+  const acc: NeedAcc = { required: false, advisable: false, worstRatio: Infinity, gov: undefined, govActual: 0 };
+  consider(acc, c, wcGtw, gtw);
+  consider(acc, c, wcTw, tw);
+  const { required, advisable, gov, govActual } = acc;
 
   const result: WeightDistributionResult = {
     id: "weight-distribution",
