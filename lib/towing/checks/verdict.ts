@@ -7,6 +7,14 @@
 import { fP, lessThan, NO_TEXT, type Ctx } from "../context";
 import type { AnyCheckResult, CheckId, FastCheck, Governing, VerdictAction, VerdictLevel, VerdictResult } from "../types";
 
+function lacking(n: number): string {
+  return n === 1 ? "1 check still lacks data" : `${n} checks still lack data`;
+}
+
+function lowerFirst(text: string): string {
+  return text.length ? text[0]!.toLowerCase() + text.slice(1) : text;
+}
+
 /** Cautions every verdict carries. */
 export const GENERAL_CAUTIONS = [
   "The ratings come from the vehicle maker and the labels on each part; these results are only as good as the figures entered.",
@@ -66,11 +74,11 @@ export function buildVerdict(summary: FastCheck[], checks: AnyCheckResult[], c: 
   const first = overs[0] ?? tights[0];
   verdict.message =
     checked === "over"
-      ? `Over: ${first!.message}`
+      ? `Over: ${lowerFirst(first!.message)}`
       : checked === "tight"
-        ? `Tight: ${first!.message}` + (complete ? "" : ` ${incomplete.length} check${incomplete.length > 1 ? "s" : ""} still lack data.`)
+        ? `Tight: ${lowerFirst(first!.message)}` + (complete ? "" : ` ${lacking(incomplete.length)}.`)
         : complete
           ? `Within: every check passes with at least ${fP(c.tight)} to spare.`
-          : `Not confirmed: the checks with data pass, but ${incomplete.length} still lack data.`;
+          : `Not confirmed: the checks with data pass, but ${lacking(incomplete.length)}.`;
   return verdict;
 }

@@ -54,7 +54,8 @@ describe("verdict", () => {
     expect(v.level).toBe("tight");
     expect(v.complete).toBe(false);
     expect(v.incomplete).toContain("combined-weight");
-    expect(v.message).toMatch(/lack data/);
+    expect(v.incomplete).toEqual(["combined-weight", "envelope"]);
+    expect(v.message).toMatch(/2 checks still lack data/);
   });
 
   it("the fast path agrees with the full evaluation", () => {
