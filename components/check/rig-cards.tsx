@@ -1,0 +1,443 @@
+"use client";
+
+/**
+ * The three input cards of the workbench: the vehicle, the hitch, and what is hitched. Each field says where
+ * its number is found and how to measure it; the uncommon ones sit under "More measurements".
+ */
+import { useId, type ReactNode } from "react";
+import { useFormContext, useWatch } from "react-hook-form";
+import { Field, Select, cn } from "@/components/ui";
+import { formatQuantity } from "@/lib/format";
+import { ACCESSORY_TYPES, BALL_SIZES, BRAKE_TYPES, RECEIVER_SIZES, TRAILER_TYPES, type AccessoryType, type TrailerType } from "@/lib/towing";
+import { ChoiceField, FieldGrid, FieldGroup, MoreMeasurements, NumField, unitFor, useUnits } from "./field-parts";
+import type { HitchedKind, RigFormValues } from "./rig-form";
+
+export const TRAILER_TYPE_LABELS: Record<TrailerType, string> = {
+  utility: "Utility (open)",
+  "enclosed-cargo": "Enclosed cargo",
+  travel: "Travel camper",
+  boat: "Boat",
+  "car-hauler": "Car hauler",
+  "horse-livestock": "Horse or livestock",
+  other: "Other",
+};
+
+export const ACCESSORY_TYPE_LABELS: Record<AccessoryType, string> = {
+  "platform-rack": "Platform bike rack",
+  "hanging-rack": "Hanging bike rack",
+  "cargo-carrier": "Cargo carrier",
+  other: "Other",
+};
+
+const BRAKE_LABELS: Record<(typeof BRAKE_TYPES)[number], string> = { none: "None", surge: "Surge", electric: "Electric", other: "Other" };
+
+const inches = (size: string) => ({ value: size, label: `${size} in` });
+
+// ---------------------------------------------------------------- summaries
+
+function joinParts(parts: Array<string | false | undefined>): string {
+  const given = parts.filter(Boolean) as string[];
+  return given.length ? given.join(" · ") : "Nothing entered yet";
+}
+
+function useQuantities() {
+  const units = useUnits();
+  return {
+    w: (v: number | undefined) => (typeof v === "number" && Number.isFinite(v) ? formatQuantity({ value: v, unit: unitFor("mass", units) }) : undefined),
+    l: (v: number | undefined) => (typeof v === "number" && Number.isFinite(v) ? formatQuantity({ value: v, unit: unitFor("length", units) }) : undefined),
+  };
+}
+
+export function VehicleSummary() {
+  const { control } = useFormContext<RigFormValues>();
+  const [vehicle, load] = useWatch({ control, name: ["vehicle", "load"] });
+  const { w, l } = useQuantities();
+  const tow = w(vehicle?.towRating);
+  const tongue = w(vehicle?.tongueWeightLimit);
+  const gvwr = w(vehicle?.gvwr);
+  const wb = l(vehicle?.wheelbase);
+  const aboard = [load?.occupants, load?.cargo].filter((n): n is number => typeof n === "number" && Number.isFinite(n));
+  return (
+    <>
+      {joinParts([
+        tow && `Tows ${tow}`,
+        tongue && `tongue ${tongue}`,
+        gvwr && `GVWR ${gvwr}`,
+        wb && `wheelbase ${wb}`,
+        aboard.length > 0 && `aboard ${w(aboard.reduce((a, b) => a + b, 0))}`,
+      ])}
+    </>
+  );
+}
+
+export function HitchSummary() {
+  const { control } = useFormContext<RigFormValues>();
+  const [hitch, mount, extender] = useWatch({ control, name: ["hitch", "ballMount", "extender"] });
+  const { w, l } = useQuantities();
+  return (
+    <>
+      {joinParts([
+        hitch?.class !== undefined && Number.isFinite(hitch.class) && `Class ${hitch.class}`,
+        hitch?.receiverSize && `${hitch.receiverSize} in receiver`,
+        w(hitch?.gtwRating) && `rated ${w(hitch?.gtwRating)} / ${w(hitch?.twRating) ?? "—"}`,
+        l(hitch?.receiverHeight) && `${l(hitch?.receiverHeight)} high`,
+        mount?.drop !== undefined && Number.isFinite(mount.drop) && `${mount.drop >= 0 ? "drop" : "rise"} ${l(Math.abs(mount.drop))}`,
+        l(extender?.length) && `extender ${l(extender?.length)}`,
+      ])}
+    </>
+  );
+}
+
+export function HitchedSummary({ kind }: { kind: HitchedKind }) {
+  const { control } = useFormContext<RigFormValues>();
+  const [trailer, accessory, wd] = useWatch({ control, name: ["trailer", "accessory", "weightDistribution"] });
+  const { w } = useQuantities();
+  if (kind === "accessory")
+    return (
+      <>
+        {joinParts([
+          ACCESSORY_TYPE_LABELS[(accessory?.type ?? "platform-rack") as AccessoryType],
+          w(accessory?.weight),
+          w(accessory?.loadWeight) && `load ${w(accessory?.loadWeight)}`,
+        ])}
+      </>
+    );
+  return (
+    <>
+      {joinParts([
+        `${TRAILER_TYPE_LABELS[(trailer?.type ?? "travel") as TrailerType]} trailer`,
+        w(trailer?.grossTrailerWeight),
+        w(trailer?.tongueWeight) && `tongue ${w(trailer?.tongueWeight)}${trailer?.tongueWeightBasis ? ` (${trailer.tongueWeightBasis})` : ""}`,
+        wd?.used && "weight distribution on",
+      ])}
+    </>
+  );
+}
+
+// ---------------------------------------------------------------- diagrams
+
+/** Where the hitch's two measurements are taken; a sketch, not to scale. */
+function HitchDiagram() {
+  return (
+    <figure className="rounded-md border border-rule bg-paper/70 p-2 sm:max-w-xs">
+      <svg viewBox="0 0 240 120" className="block w-full" role="img" aria-label="Receiver height runs from the ground to the top inside edge of the receiver opening. Pin to fascia runs from the centre of the pin hole forward to the outermost point of the bumper.">
+        <defs>
+          <marker id="hitch-diagram-arrow" viewBox="0 0 10 10" refX="5" refY="5" markerWidth="6" markerHeight="6" orient="auto-start-reverse">
+            <path d="M 0 1 L 9 5 L 0 9 z" fill="var(--color-ink)" />
+          </marker>
+        </defs>
+        <line x1="0" y1="108" x2="240" y2="108" stroke="var(--color-ink-soft)" strokeWidth="1.5" />
+        <path d="M 8 30 L 92 30 Q 104 30 104 44 L 104 62 L 60 62" fill="none" stroke="var(--color-ink-soft)" strokeWidth="1.5" />
+        <rect x="60" y="62" width="110" height="16" fill="var(--color-panel)" stroke="var(--color-ink)" strokeWidth="1.5" />
+        <circle cx="150" cy="70" r="3.5" fill="var(--color-ink)" />
+        <line x1="150" y1="44" x2="150" y2="60" stroke="var(--color-ink-faint)" strokeDasharray="2 2" />
+        <line x1="104" y1="50" x2="150" y2="50" stroke="var(--color-ink)" markerStart="url(#hitch-diagram-arrow)" markerEnd="url(#hitch-diagram-arrow)" />
+        <text x="127" y="44" textAnchor="middle" fontSize="10" fill="var(--color-ink)">pin to fascia</text>
+        <line x1="188" y1="108" x2="188" y2="62" stroke="var(--color-ink)" markerStart="url(#hitch-diagram-arrow)" markerEnd="url(#hitch-diagram-arrow)" />
+        <line x1="170" y1="62" x2="196" y2="62" stroke="var(--color-ink-faint)" strokeDasharray="2 2" />
+        <text x="194" y="90" fontSize="10" fill="var(--color-ink)">receiver</text>
+        <text x="194" y="102" fontSize="10" fill="var(--color-ink)">height</text>
+      </svg>
+      <figcaption className="mt-1 text-xs leading-snug text-ink-soft">
+        Measure with the vehicle loaded as it will travel, on level ground. Not to scale.
+      </figcaption>
+    </figure>
+  );
+}
+
+/** Where the three fender heights are read. */
+function FenderDiagram() {
+  return (
+    <figure className="rounded-md border border-rule bg-paper/70 p-2 sm:max-w-xs">
+      <svg viewBox="0 0 240 92" className="block w-full" role="img" aria-label="Front fender height runs from the ground straight up to the lip of the front wheel well, above the wheel centre.">
+        <defs>
+          <marker id="fender-diagram-arrow" viewBox="0 0 10 10" refX="5" refY="5" markerWidth="6" markerHeight="6" orient="auto-start-reverse">
+            <path d="M 0 1 L 9 5 L 0 9 z" fill="var(--color-ink)" />
+          </marker>
+        </defs>
+        <line x1="0" y1="84" x2="240" y2="84" stroke="var(--color-ink-soft)" strokeWidth="1.5" />
+        <path d="M 10 40 L 62 40 A 34 34 0 0 1 130 40 L 230 40" fill="none" stroke="var(--color-ink-soft)" strokeWidth="1.5" />
+        <circle cx="96" cy="60" r="24" fill="var(--color-sunken)" stroke="var(--color-ink-soft)" strokeWidth="1.5" />
+        <line x1="96" y1="84" x2="96" y2="7" stroke="var(--color-ink)" markerStart="url(#fender-diagram-arrow)" markerEnd="url(#fender-diagram-arrow)" />
+        <text x="140" y="22" fontSize="10" fill="var(--color-ink)">ground to wheel-well lip,</text>
+        <text x="140" y="34" fontSize="10" fill="var(--color-ink)">above the wheel centre</text>
+      </svg>
+    </figure>
+  );
+}
+
+// ---------------------------------------------------------------- cards' bodies
+
+export function VehicleFields({ tools }: { tools?: ReactNode }) {
+  return (
+    <>
+      {tools}
+      <FieldGroup title="Ratings" note="From the owner's manual (towing section) and the door-jamb label.">
+        <FieldGrid>
+          <NumField name="vehicle.towRating" label="Tow rating" kind="mass" help="Owner's manual, towing section: the figure without weight distribution." />
+          <NumField name="vehicle.tongueWeightLimit" label="Tongue-weight limit" kind="mass" help="Owner's manual, towing section." />
+          <NumField name="vehicle.gvwr" label="GVWR" kind="mass" help="Door-jamb label, driver's side." />
+          <NumField name="vehicle.curbWeight" label="Curb weight" kind="mass" help="Owner's manual, or GVWR less the label's payload." />
+          <NumField name="vehicle.gcwr" label="GCWR" kind="mass" help="Owner's manual, towing section." />
+          <NumField name="vehicle.gawrFront" label="Front GAWR" kind="mass" help="Door-jamb label." />
+          <NumField name="vehicle.gawrRear" label="Rear GAWR" kind="mass" help="Door-jamb label." />
+        </FieldGrid>
+      </FieldGroup>
+      <FieldGroup title="Lengths" note="A tape measure along the ground, or the owner's manual's dimensions page.">
+        <FieldGrid>
+          <NumField name="vehicle.wheelbase" label="Wheelbase" kind="length" help="Front axle centre to rear axle centre." />
+          <NumField name="vehicle.rearAxleToHitch" label="Rear axle to ball" kind="length" help="Rear axle centre to the ball's centre (to the pin hole for a rack or carrier), along the ground." />
+        </FieldGrid>
+      </FieldGroup>
+      <FieldGroup title="Load in the vehicle" note="What rides along when it tows. Ask, or weigh.">
+        <FieldGrid>
+          <NumField name="load.occupants" label="Occupants" kind="mass" help="Everyone who rides, together." />
+          <NumField name="load.cargo" label="Cargo" kind="mass" help="Luggage and gear in the vehicle." />
+          <NumField name="load.hitchHardware" label="Hitch hardware" kind="mass" help="Ball mount or weight-distribution head and bars: the maker's sheet or a bathroom scale." />
+        </FieldGrid>
+      </FieldGroup>
+      <MoreMeasurements>
+        <FieldGrid>
+          <NumField name="vehicle.towRatingWd" label="Tow rating with weight distribution" kind="mass" help="Owner's manual, towing section." />
+          <NumField name="vehicle.tongueWeightLimitWd" label="Tongue-weight limit with weight distribution" kind="mass" help="Owner's manual, towing section." />
+          <NumField name="vehicle.wdRequiredAbove" label="Weight distribution required above" kind="mass" help="Owner's manual: the trailer weight above which it is required." />
+          <NumField name="vehicle.payloadLabel" label="Payload on the label" kind="mass" help="Tyre and loading label on the door jamb." />
+          <NumField name="vehicle.departureAngle" label="Departure angle" kind="angle" help="Owner's manual, dimensions page." />
+        </FieldGrid>
+        <FieldGroup title="Weighed axle loads, unhitched" note="A public axle scale, vehicle loaded as it will travel.">
+          <FieldGrid>
+            <NumField name="vehicle.axleWeights.front" label="Front axle, unhitched" kind="mass" />
+            <NumField name="vehicle.axleWeights.rear" label="Rear axle, unhitched" kind="mass" />
+          </FieldGrid>
+        </FieldGroup>
+        <FieldGroup title="Weighed axle loads, hitched" note="The same scale with the trailer on, weight distribution released.">
+          <FieldGrid>
+            <NumField name="vehicle.axleWeightsHitched.front" label="Front axle, hitched" kind="mass" />
+            <NumField name="vehicle.axleWeightsHitched.rear" label="Rear axle, hitched" kind="mass" />
+          </FieldGrid>
+        </FieldGroup>
+        <FieldGroup title="Maker's tongue-weight band" note="Only when the owner's manual states its own share of the trailer for the tongue.">
+          <FieldGrid>
+            <NumField name="vehicle.tongueShareBand.min" label="Lowest tongue share" kind="percent" />
+            <NumField name="vehicle.tongueShareBand.max" label="Highest tongue share" kind="percent" />
+          </FieldGrid>
+        </FieldGroup>
+      </MoreMeasurements>
+    </>
+  );
+}
+
+export function HitchFields({ kind }: { kind: HitchedKind }) {
+  return (
+    <>
+      <FieldGroup title="Receiver" note="Ratings from the hitch's own label or stamp; heights and distances with a tape measure.">
+        <div className="flex flex-col gap-4 sm:flex-row sm:items-start">
+          <FieldGrid className="flex-1">
+            <ChoiceField name="hitch.class" label="Hitch class" numeric emptyLabel="Not given" options={[1, 2, 3, 4, 5].map((n) => ({ value: String(n), label: `Class ${n}` }))} help="On the hitch's label." />
+            <ChoiceField name="hitch.receiverSize" label="Receiver size" emptyLabel="Not given" options={RECEIVER_SIZES.map(inches)} help="Inside width of the opening." />
+          </FieldGrid>
+        </div>
+        <FieldGrid className="mt-4">
+          <NumField name="hitch.gtwRating" label="Hitch GTW rating" kind="mass" help="Hitch label: gross trailer weight, weight-carrying." />
+          <NumField name="hitch.twRating" label="Hitch TW rating" kind="mass" help="Hitch label: tongue weight, weight-carrying." />
+          <NumField name="hitch.receiverHeight" label="Receiver height" kind="length" help="Ground to the top inside edge of the receiver opening, vehicle loaded." />
+          <NumField name="hitch.pinToFascia" label="Pin to fascia" kind="length" help="Centre of the pin hole forward to the outermost point of the bumper." />
+        </FieldGrid>
+        <div className="mt-4">
+          <HitchDiagram />
+        </div>
+        <div className="mt-4">
+          <MoreMeasurements label="Ratings with weight distribution">
+            <FieldGrid>
+              <NumField name="hitch.gtwRatingWd" label="Hitch GTW rating with WD" kind="mass" help="Hitch label, weight-distributing line." />
+              <NumField name="hitch.twRatingWd" label="Hitch TW rating with WD" kind="mass" help="Hitch label, weight-distributing line." />
+            </FieldGrid>
+          </MoreMeasurements>
+        </div>
+      </FieldGroup>
+      {kind === "trailer" ? (
+        <FieldGroup title="Ball mount" note="Stamped on the ball mount; rise or drop and length with a tape measure.">
+          <FieldGrid>
+            <NumField name="ballMount.drop" label="Drop (negative for a rise)" kind="length" help="Top of the shank to the top of the ball platform. A rise is a negative figure." />
+            <NumField name="ballMount.length" label="Ball mount length" kind="length" help="Pin hole to the ball's centre." />
+            <NumField name="ballMount.gtwRating" label="Ball mount GTW rating" kind="mass" help="Stamp on the ball mount." />
+            <NumField name="ballMount.twRating" label="Ball mount TW rating" kind="mass" help="Stamp on the ball mount." />
+          </FieldGrid>
+          <div className="mt-4">
+            <MoreMeasurements>
+              <NumField name="ballMount.squatAllowance" label="Expected rear squat" kind="length" help="How far the rear drops once hitched: the fender height difference, or an estimate." />
+            </MoreMeasurements>
+          </div>
+        </FieldGroup>
+      ) : null}
+      <FieldGroup title="Extender" note="Only if one is fitted: its own label gives its rating, often lower than the hitch's.">
+        <FieldGrid>
+          <NumField name="extender.length" label="Extender length" kind="length" help="How far it moves the pin hole back." />
+          <NumField name="extender.twRating" label="Extender TW rating" kind="mass" help="The extender's label." />
+        </FieldGrid>
+      </FieldGroup>
+    </>
+  );
+}
+
+export interface HitchedChoiceProps {
+  kind: HitchedKind;
+  onChange: (kind: HitchedKind) => void;
+}
+
+/** The segmented choice: a trailer, or a rack or carrier in the receiver. */
+export function HitchedChoice({ kind, onChange }: HitchedChoiceProps) {
+  const name = useId();
+  const options: Array<[HitchedKind, string]> = [
+    ["trailer", "A trailer"],
+    ["accessory", "A rack or carrier"],
+  ];
+  return (
+    <fieldset className="min-w-0">
+      <legend className="mb-1.5 text-sm font-medium text-ink">What is hitched</legend>
+      <div className="inline-grid w-full grid-cols-2 rounded-md border border-rule bg-sunken p-1 sm:w-auto">
+        {options.map(([value, label]) => (
+          <label
+            key={value}
+            className={cn(
+              "flex min-h-10 cursor-pointer items-center justify-center rounded px-4 text-sm font-medium has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-accent",
+              kind === value ? "bg-panel text-ink shadow-card" : "text-ink-soft hover:text-ink",
+            )}
+          >
+            <input type="radio" name={name} value={value} checked={kind === value} onChange={() => onChange(value)} className="sr-only" />
+            {label}
+          </label>
+        ))}
+      </div>
+    </fieldset>
+  );
+}
+
+function TongueBasis() {
+  const { register } = useFormContext<RigFormValues>();
+  const name = "trailer.tongueWeightBasis" as const;
+  return (
+    <fieldset className="min-w-0">
+      <legend className="text-sm font-medium text-ink">The tongue weight is</legend>
+      <div className="mt-1.5 flex flex-wrap gap-x-5 gap-y-2">
+        {(["measured", "estimated"] as const).map((value) => (
+          <label key={value} className="inline-flex min-h-10 items-center gap-2 text-sm text-ink">
+            <input type="radio" value={value} {...register(name)} className="size-4 accent-(--color-accent)" />
+            {value === "measured" ? "Weighed" : "An estimate"}
+          </label>
+        ))}
+      </div>
+    </fieldset>
+  );
+}
+
+function WdUsed() {
+  const { register } = useFormContext<RigFormValues>();
+  return (
+    <label className="inline-flex min-h-10 items-center gap-2 text-sm font-medium text-ink">
+      <input type="checkbox" {...register("weightDistribution.used")} className="size-4 accent-(--color-accent)" />
+      Weight distribution is used
+    </label>
+  );
+}
+
+export function TrailerFields({ tools }: { tools?: ReactNode }) {
+  return (
+    <>
+      {tools}
+      <FieldGroup title="Trailer">
+        <FieldGrid>
+          <ChoiceField name="trailer.type" label="Trailer type" options={TRAILER_TYPES.map((t) => ({ value: t, label: TRAILER_TYPE_LABELS[t] }))} help="Sets the usual tongue-weight band." />
+          <NumField name="trailer.grossTrailerWeight" label="Gross trailer weight" kind="mass" help="Loaded as it will travel: a public scale, or the trailer's own GVWR as the upper bound." />
+          <NumField name="trailer.tongueWeight" label="Tongue weight" kind="mass" help="A tongue scale, a bathroom scale and beam, or the difference at a public scale." />
+          <TongueBasis />
+        </FieldGrid>
+      </FieldGroup>
+      <FieldGroup title="Coupler, ball and chains" note="Each is stamped or tagged on the part itself.">
+        <FieldGrid>
+          <NumField name="trailer.couplerHeight" label="Coupler height" kind="length" help="Ground to the bottom of the coupler, with the trailer level." />
+          <NumField name="trailer.couplerRating" label="Coupler rating" kind="mass" help="Stamp on the coupler." />
+          <ChoiceField name="trailer.couplerBallSize" label="Coupler ball size" emptyLabel="Not given" options={BALL_SIZES.map(inches)} help="Stamped on the coupler." />
+          <ChoiceField name="trailer.ballSize" label="Ball size" emptyLabel="Not given" options={BALL_SIZES.map(inches)} help="Stamped on top of the ball." />
+          <NumField name="trailer.ballRating" label="Ball rating" kind="mass" help="Stamped on top of the ball." />
+          <NumField name="trailer.safetyChainRating" label="Safety chain rating (each)" kind="mass" help="Tag or stamp on each chain." />
+          <ChoiceField name="trailer.brakes" label="Trailer brakes" emptyLabel="Not given" options={BRAKE_TYPES.map((b) => ({ value: b, label: BRAKE_LABELS[b] }))} />
+        </FieldGrid>
+      </FieldGroup>
+      <FieldGroup title="Weight distribution" note="Front fender height at the wheel-well lip, above the wheel centre, on level ground: unhitched, hitched with the bars off, hitched with the bars on.">
+        <div className="space-y-4">
+          <WdUsed />
+          <FieldGrid>
+            <NumField name="weightDistribution.tongueRating" label="WD tongue rating" kind="mass" help="Label on the spring bars or head." />
+            <NumField name="weightDistribution.fenderUnhitched" label="Fender height, unhitched" kind="length" help="Tape measure, before hitching." />
+            <NumField name="weightDistribution.fenderHitched" label="Fender height, hitched" kind="length" help="Trailer on the ball, bars released." />
+            <NumField name="weightDistribution.fenderWithWd" label="Fender height, hitched with WD" kind="length" help="Bars tensioned as they will travel." />
+          </FieldGrid>
+          <FenderDiagram />
+        </div>
+      </FieldGroup>
+      <MoreMeasurements>
+        <NumField name="weightDistribution.restorationTarget" label="Front restoration target" kind="percent" help="Share of the lost front-axle load to give back; the owner's manual may set it (often 50 %)." />
+        <FieldGroup title="Tongue weighed with a scale" note="A scale straight under the jack, or a bathroom scale under a beam resting on a block.">
+          <FieldGrid>
+            <NumField name="trailer.tongueMeasurement.scaleReading" label="Scale reading" kind="mass" />
+            <NumField name="trailer.tongueMeasurement.blockToJack" label="Block to jack" kind="length" help="Beam method only: the block's centre to the jack." />
+            <NumField name="trailer.tongueMeasurement.jackToScale" label="Jack to scale" kind="length" help="Beam method only: the jack to the scale's pipe." />
+          </FieldGrid>
+        </FieldGroup>
+      </MoreMeasurements>
+    </>
+  );
+}
+
+export function AccessoryFields({ tools }: { tools?: ReactNode }) {
+  return (
+    <>
+      {tools}
+      <FieldGroup title="Rack or carrier" note="Weights from the maker's sheet or a bathroom scale; distances with a tape measure from the pin hole.">
+        <FieldGrid>
+          <ChoiceField name="accessory.type" label="Accessory type" options={ACCESSORY_TYPES.map((t) => ({ value: t, label: ACCESSORY_TYPE_LABELS[t] }))} />
+          <NumField name="accessory.weight" label="Accessory weight" kind="mass" help="Its own weight, empty." />
+          <NumField name="accessory.loadWeight" label="Load on it" kind="mass" help="Bikes, boxes: weigh them." />
+          <NumField name="accessory.loadCenterFromPin" label="Pin to the load's centre" kind="length" help="Pin hole back to the middle of the load." />
+          <NumField name="accessory.foldClearance" label="Fold clearance needed" kind="length" help="Maker's sheet: room it needs between the pin hole and the bumper when folded up." />
+        </FieldGrid>
+      </FieldGroup>
+      <FieldGroup title="Lowest point" note="With the accessory fitted and loaded: find the part nearest the ground.">
+        <FieldGrid>
+          <NumField name="accessory.lowestPointBelowShankTop" label="Lowest point below the shank top" kind="length" help="Top of the shank down to the lowest point (negative if above)." />
+          <NumField name="accessory.lowestPointBehindPin" label="Lowest point behind the pin" kind="length" help="Pin hole back to the lowest point, along the ground." />
+          <NumField name="accessory.shankRise" label="Shank rise" kind="length" help="A raised shank lifts the accessory; negative for a drop." />
+        </FieldGrid>
+      </FieldGroup>
+    </>
+  );
+}
+
+export interface ProfilePickerProps {
+  label: string;
+  options: Array<{ id: string; name: string }>;
+  onPick: (id: string) => void;
+}
+
+/** A saved profile to fill the card from; stays on "Choose…" after use so it can be picked again. */
+export function ProfilePicker({ label, options, onPick }: ProfilePickerProps) {
+  if (!options.length) return null;
+  return (
+    <Field label={label} className="w-full sm:w-72">
+      <Select
+        value=""
+        onChange={(e) => {
+          if (e.target.value) onPick(e.target.value);
+        }}
+      >
+        <option value="">Choose a saved profile…</option>
+        {options.map((o) => (
+          <option key={o.id} value={o.id}>
+            {o.name}
+          </option>
+        ))}
+      </Select>
+    </Field>
+  );
+}
