@@ -214,7 +214,12 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
   const advice: string[] = [];
   if (recv !== undefined && recv <= LOW_RECEIVER_IN + EPS)
     advice.push(`The receiver sits low (${fL(c, recv)} from the ground): a raised shank keeps the accessory clear of driveways and ramps.`);
-  if (loadPart.status === "over") advice.push("Carry less on the accessory, bring the load closer to the vehicle, or remove the extender.");
+  if (loadPart.status === "over")
+    advice.push(
+      ext > 0
+        ? "Carry less on the accessory, bring the load closer to the vehicle, or do without the extender."
+        : "Carry less on the accessory, or bring the load closer to the vehicle.",
+    );
   const foldPart = parts.find((p) => p.id === "fold");
   if (foldPart?.status === "over") advice.push("The accessory will hit the bumper when folded: choose one that folds in the room available, or fit a short extender if its rating allows.");
   if (groundPart.status === "over" && ground !== undefined && ground <= EPS) advice.push("The accessory's lowest point would touch the ground: fit a raised shank.");

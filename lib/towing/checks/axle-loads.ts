@@ -144,7 +144,7 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
     g && result.actual && result.limit
       ? result.status === "over"
         ? `${g.label === "Rear GAWR" ? "The rear axle" : "The front axle"} carries ${fW(c, result.actual.value / c.u.weightFactor)}, over its ${g.label} of ${fW(c, g.value / c.u.weightFactor)}.`
-        : `${g.label === "Rear GAWR" ? "The rear axle" : "The front axle"} is the closer to its rating: ${fW(c, result.actual.value / c.u.weightFactor)} of ${fW(c, g.value / c.u.weightFactor)}.` +
+        : `${g.label === "Rear GAWR" ? "The rear axle" : "The front axle"} has the least room: ${fW(c, result.actual.value / c.u.weightFactor)} of its ${fW(c, g.value / c.u.weightFactor)} ${g.label === "Rear GAWR" ? "rear" : "front"} GAWR.` +
           (result.status === "incomplete" ? " Some figures are missing." : "")
       : change
         ? `The hitch load adds ${fW(c, change.rear)} to the rear axle and lifts ${fW(c, -change.front)} off the front; weigh the axles to compare with the GAWRs.`

@@ -101,6 +101,8 @@ export function checkBallMount(d: Derived, c: Ctx): BallMountResult | null {
         ? `A ${word(needed)} keeps the trailer level; the nearest common size is a ${word(nearestCommonDrop(needed))}.`
         : result.status === "over"
           ? `The ball mount's ${word(drop)} leaves the trailer ${fL(c, Math.abs(drop - needed))} off level; a ${word(needed)} is needed.`
-          : `The ball mount's ${word(drop)} keeps the trailer within ${fL(c, Math.abs(drop - needed))} of level.`;
+          : Math.abs(drop - needed) < 0.05
+            ? `The ball mount's ${word(drop)} keeps the trailer level.`
+            : `The ball mount's ${word(drop)} keeps the trailer within ${fL(c, Math.abs(drop - needed))} of level.`;
   return result;
 }
