@@ -11,6 +11,8 @@ export interface NavItem {
 /** The workspace's sections. Each page re-checks the same permission on the server. */
 export const NAV_ITEMS: NavItem[] = [
   { href: "/overview", label: "Overview" },
+  { href: "/check", label: "Check a rig", permission: "checks.run" },
+  { href: "/checks", label: "Saved checks", permission: "checks.run" },
   { href: "/team", label: "Team", permission: "team.manage" },
   { href: "/settings", label: "Organisation", permission: "organisation.manage" },
   { href: "/mailbox", label: "Mailbox", permission: "mailbox.read", devOnly: true },
