@@ -49,6 +49,9 @@ export function checkPayload(d: Derived, c: Ctx): CheckResult {
     limit = v.gvwr;
     actual = partial;
     result.governing = govW(c, "vehicle.gvwr", "GVWR", v.gvwr);
+    // With a known payload capacity, the same room (GVWR − weighed GVW) is measured against the payload,
+    // so a weighed and an unweighed rig are called tight by the same share of the same limit.
+    const empty = d.payloadCapacity !== undefined ? v.gvwr - d.payloadCapacity : undefined;
     if (c.detail)
       steps.push({
         id: "gross-vehicle-weight",
@@ -63,6 +66,23 @@ export function checkPayload(d: Derived, c: Ctx): CheckResult {
         result: rW(c, "GVW", partial),
         note: "Compared with the GVWR: the room left is the payload still free.",
       });
+    if (empty !== undefined && d.payloadCapacity !== undefined) {
+      limit = d.payloadCapacity;
+      actual = partial - empty;
+      result.governing =
+        d.payloadSource === "label"
+          ? govW(c, "vehicle.payloadLabel", "Payload on the label", limit)
+          : govW(c, "vehicle.gvwr", "GVWR less curb weight", limit);
+      if (c.detail)
+        steps.push({
+          id: "payload-used",
+          title: "Payload used, as weighed",
+          formulaWords: "Weighed vehicle with the hitch load, less the empty vehicle (GVWR minus payload capacity)",
+          formula: "GVW - (GVWR - P_cap)",
+          inputs: [iW(c, "GVW", "Weighed with the hitch load", partial), iW(c, "GVWR", "GVWR", v.gvwr), iW(c, "P_cap", "Payload capacity", limit)],
+          result: rW(c, "P_used", actual),
+        });
+    }
   } else {
     const occ = rig.load?.occupants;
     const cargo = rig.load?.cargo;

@@ -47,7 +47,18 @@ describe("payload", () => {
 
   it("uses the scale when the vehicle was weighed", () => {
     const res = pl(pickupRig());
-    // Source: GM (Cadillac) owner's manuals (tongue weight counts against GVWR): 3,000 + 2,500 + 500 = 6,000 lb
+    // Source: GM (Cadillac) owner's manuals (tongue weight counts against GVWR): 3,000 + 2,500 + 500 = 6,000 lb weighed
+    expect(res.steps.find((s) => s.id === "gross-vehicle-weight")?.result.value).toBe(6000);
+    // Source: 49 CFR 567.4(g)(3): payload = GVWR − curb = 7,000 − 5,100 = 1,900 lb; used as weighed 6,000 − 5,100 = 900 lb
+    expect(res.limit?.value).toBe(1900);
+    expect(res.actual?.value).toBe(900);
+    // Physics: the room left is the same either way, GVWR − weighed GVW = 1,000 lb
+    expect(res.margin?.value).toBe(1000);
+  });
+
+  it("compares a weighed vehicle with the GVWR itself when no payload capacity is known", () => {
+    const res = pl(pickupRig({ vehicle: { curbWeight: undefined } }));
+    // Source: GM (Cadillac) owner's manuals (tongue weight counts against GVWR): 6,000 lb weighed against 7,000 lb
     expect(res.actual?.value).toBe(6000);
     expect(res.limit?.value).toBe(7000);
   });
