@@ -11,5 +11,5 @@ export function refusal(result: ActionRefusal): Response {
 }
 
 export function badRequest(fieldErrors: Record<string, string[]>, message = "Some fields need attention."): Response {
-  return json({ error: "invalid_input", message, fieldErrors }, 400);
+  return json({ ok: false, error: "invalid_input", message, fieldErrors }, 400);
 }

@@ -22,6 +22,7 @@ export {
   type AccessoryType,
 } from "./input";
 export { convertRig } from "./convert-rig";
+export { parseEvaluateRequest, type EvaluateRequest } from "./request";
 export { tongueWeightByScale, tongueWeightByBeam, tongueWeightByPublicScale, DIRECT_SCALE_LIMIT_LB, type MeasureResult, type AxlePair } from "./measure";
 export { GENERAL_CAUTIONS } from "./checks/verdict";
 export { TONGUE_BANDS } from "./derive";

@@ -1,4 +1,4 @@
-import { evaluateRig, parseRig } from "@/lib/towing";
+import { evaluateRig, parseEvaluateRequest } from "@/lib/towing";
 import { badRequest, json } from "@/lib/server/http";
 import { consume } from "@/lib/server/rate-limit";
 import { clientAddress } from "@/lib/server/request";
@@ -10,7 +10,7 @@ const PER_MINUTE = 120;
 
 /**
  * The calculation core over HTTP, no account needed: the same input and output as `npm run evaluate`
- * (docs/evaluate.md). Optional `?tightMarginPercent=` (1–50). Nothing is stored.
+ * (docs/evaluate.md): a bare rig or `{ rig, options }`. Nothing is stored.
  */
 export async function POST(request: Request) {
   const limit = consume(`evaluate:${await clientAddress()}`, PER_MINUTE, 60_000);
@@ -27,10 +27,7 @@ export async function POST(request: Request) {
   } catch {
     return badRequest({ rig: ["The body is not valid JSON."] }, "The body is not valid JSON.");
   }
-  const parsed = parseRig(body);
+  const parsed = parseEvaluateRequest(body);
   if (!parsed.ok) return badRequest(parsed.fieldErrors);
-  const percent = new URL(request.url).searchParams.get("tightMarginPercent");
-  const ratio = percent === null ? undefined : Number(percent) / 100;
-  if (ratio !== undefined && !(ratio >= 0.01 && ratio <= 0.5)) return badRequest({ tightMarginPercent: ["Use 1 to 50."] });
-  return json(evaluateRig(parsed.rig, { tightMarginRatio: ratio }));
+  return json(evaluateRig(parsed.rig, parsed.options));
 }

@@ -1,0 +1,37 @@
+/**
+ * The evaluate contract shared by `npm run evaluate` and `POST /api/v1/evaluate`: a bare rig, or
+ * `{ rig, options }`. Never throws; field-error keys are dotted paths (docs/evaluate.md).
+ */
+import { parseRig, type RigInput } from "./input";
+import type { EvaluateOptions } from "./types";
+
+export type EvaluateRequest =
+  | { ok: true; rig: RigInput; options: EvaluateOptions }
+  | { ok: false; fieldErrors: Record<string, string[]> };
+
+export function parseEvaluateRequest(body: unknown): EvaluateRequest {
+  const wrapped = body !== null && typeof body === "object" && !Array.isArray(body) && "rig" in body;
+  const rawRig = wrapped ? (body as { rig: unknown }).rig : body;
+  const rawOptions = wrapped ? (body as { options?: unknown }).options : undefined;
+  const options: EvaluateOptions = {};
+  if (rawOptions !== undefined) {
+    if (rawOptions === null || typeof rawOptions !== "object" || Array.isArray(rawOptions)) {
+      return { ok: false, fieldErrors: { options: ["Options must be an object."] } };
+    }
+    const { tightMarginRatio, accessoryReferenceArm } = rawOptions as Record<string, unknown>;
+    if (tightMarginRatio !== undefined) {
+      if (typeof tightMarginRatio !== "number" || !Number.isFinite(tightMarginRatio) || tightMarginRatio < 0 || tightMarginRatio > 0.5) {
+        return { ok: false, fieldErrors: { "options.tightMarginRatio": ["Enter a number from 0 to 0.5."] } };
+      }
+      options.tightMarginRatio = tightMarginRatio;
+    }
+    if (accessoryReferenceArm !== undefined) {
+      if (typeof accessoryReferenceArm !== "number" || !Number.isFinite(accessoryReferenceArm) || accessoryReferenceArm <= 0 || accessoryReferenceArm > 2000) {
+        return { ok: false, fieldErrors: { "options.accessoryReferenceArm": ["Enter a length above zero."] } };
+      }
+      options.accessoryReferenceArm = accessoryReferenceArm;
+    }
+  }
+  const parsed = parseRig(rawRig);
+  return parsed.ok ? { ok: true, rig: parsed.rig, options } : parsed;
+}
