@@ -1,0 +1,41 @@
+import type { Metadata } from "next";
+import { CheckWorkbench } from "@/components/check/check-workbench";
+import { PageHeader } from "@/components/ui";
+import { can } from "@/lib/roles";
+import { requirePage } from "@/lib/server/access";
+import { getCheck } from "@/lib/server/checks";
+import { listProfilesForCheck } from "@/lib/server/profiles";
+import { entityId } from "@/lib/validation/checks";
+import { saveCheckAction, saveVehicleProfileAction } from "./actions";
+
+export const metadata: Metadata = { title: "Check a rig" };
+
+export default async function CheckPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const access = await requirePage("checks.run", "/check");
+  const params = await searchParams;
+  const from = entityId.safeParse(params.from);
+  // "Duplicate" opens a saved check's inputs here; the copy is a new check once saved.
+  const source = from.success ? await getCheck(access, from.data) : undefined;
+  const profiles = await listProfilesForCheck(access);
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader
+        title={source ? "Try a change" : "Check a rig"}
+        description={
+          source
+            ? `Starting from the check saved ${source.createdAt.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" })}${source.customerName ? ` for ${source.customerName}` : ""}. The saved check stays as it was.`
+            : "Vehicle, hitch and what is hitched: the verdict follows every figure you type."
+        }
+      />
+      <CheckWorkbench
+        key={source?.id ?? "new"}
+        initialRig={source?.rig}
+        units={source?.rig.units ?? access.organisation.units}
+        tightMarginRatio={access.organisation.tightMarginRatio}
+        profiles={profiles}
+        onSave={can(access.role, "checks.save") ? saveCheckAction : undefined}
+        onSaveVehicleProfile={can(access.role, "profiles.save") ? saveVehicleProfileAction : undefined}
+      />
+    </div>
+  );
+}

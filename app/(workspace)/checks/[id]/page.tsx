@@ -1,0 +1,73 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { VerdictPanel } from "@/components/check/verdict-panel";
+import { PrintButton } from "@/components/report/print-button";
+import { Card, CardBody, CardHeader, PageHeader, buttonClasses } from "@/components/ui";
+import { can } from "@/lib/roles";
+import { requirePage } from "@/lib/server/access";
+import { getCheck } from "@/lib/server/checks";
+import { listShareLinks } from "@/lib/server/share-links";
+import { entityId } from "@/lib/validation/checks";
+import { SharePanel } from "./share-panel";
+
+export const metadata: Metadata = { title: "Saved check" };
+
+const when = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeStyle: "short" });
+
+export default async function SavedCheckPage({ params }: { params: Promise<{ id: string }> }) {
+  const access = await requirePage("checks.run");
+  const id = entityId.safeParse((await params).id);
+  const check = id.success ? await getCheck(access, id.data) : undefined;
+  if (!check) notFound();
+  const links = await listShareLinks(access, check.id);
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader
+        eyebrow={
+          <Link href="/checks" className="underline">
+            Saved checks
+          </Link>
+        }
+        title={`${check.vehicleLabel ?? "Vehicle"} with ${(check.hitchedLabel ?? "a load").toLowerCase()}`}
+        description={`Saved ${when.format(check.createdAt)}${check.customerName ? ` for ${check.customerName}` : ""}. Computed by Towmargin core ${check.coreVersion}; this snapshot never changes.`}
+        actions={
+          <>
+            <Link href={`/check?from=${check.id}`} className={buttonClasses({ variant: "secondary" })}>
+              Duplicate and change
+            </Link>
+            <PrintButton />
+          </>
+        }
+      />
+      {check.note ? (
+        <Card>
+          <CardBody>
+            <p className="text-sm whitespace-pre-wrap text-ink">
+              <span className="font-medium">Note: </span>
+              {check.note}
+            </p>
+          </CardBody>
+        </Card>
+      ) : null}
+      <Card className="no-print">
+        <CardHeader title="Share with the customer" description="A read-only page of this check, for their phone, with no account. Withdraw it at any time." />
+        <CardBody>
+          <SharePanel
+            checkId={check.id}
+            canShare={can(access.role, "checks.save")}
+            links={links.map((link) => ({
+              id: link.id,
+              tokenHint: link.tokenHint,
+              createdAt: link.createdAt.toISOString(),
+              expiresAt: link.expiresAt?.toISOString() ?? null,
+              revokedAt: link.revokedAt?.toISOString() ?? null,
+              lastOpenedAt: link.lastOpenedAt?.toISOString() ?? null,
+            }))}
+          />
+        </CardBody>
+      </Card>
+      <VerdictPanel result={check.result} />
+    </div>
+  );
+}

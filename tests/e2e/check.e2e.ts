@@ -1,0 +1,157 @@
+import { createClient } from "@libsql/client";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { inject } from "vitest";
+import { DESKTOP, firstLink, latestMailTo, openBrowser, PHONE, screenshot, signIn } from "./support/browser";
+
+type Session = Awaited<ReturnType<typeof openBrowser>>;
+
+async function countSavedChecks(): Promise<number> {
+  const client = createClient({ url: inject("databaseUrl") });
+  try {
+    return Number((await client.execute("SELECT count(*) AS n FROM saved_checks")).rows[0]!.n);
+  } finally {
+    client.close();
+  }
+}
+
+function percentile(values: number[], p: number): number {
+  const sorted = [...values].sort((a, b) => a - b);
+  return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)]!;
+}
+
+describe("the counter check, saved, shared and withdrawn", () => {
+  let staff: Session;
+  let customer: Session;
+  let checkUrl = "";
+  let linkUrl = "";
+
+  beforeAll(async () => {
+    staff = await openBrowser(DESKTOP);
+    customer = await openBrowser(PHONE);
+    await signIn(staff.page, "counter@quillfield.example.com");
+  });
+  afterAll(async () => {
+    await staff.close();
+    await customer.close();
+  });
+
+  it("fills a rig from saved profiles and the verdict follows a changed number", async () => {
+    const { page } = staff;
+    await page.goto("/check");
+    await page.getByLabel("Saved vehicle").selectOption({ label: "Harrow Ridgeline 2500 pickup" });
+    await page.getByLabel("Saved trailer").selectOption({ label: "Bramblecote 24 travel trailer" });
+    const verdict = page.getByTestId("verdict-level").first();
+    await expect.poll(() => verdict.getAttribute("data-level")).not.toBe("over");
+    await screenshot(page, "check-desktop");
+
+    const gross = page.getByLabel("Gross trailer weight");
+    await gross.fill("11500");
+    await expect.poll(() => verdict.getAttribute("data-level")).toBe("over");
+    await expect.poll(() => page.getByTestId("check-weakest-link").first().getAttribute("data-status")).toBe("over");
+    await gross.fill("6200");
+    await expect.poll(() => verdict.getAttribute("data-level")).not.toBe("over");
+  });
+
+  it("updates the verdict within one frame of a keystroke (p95 over 40 changes)", async () => {
+    const { page } = staff;
+    const latencies = await page.evaluate(async () => {
+      const input = [...document.querySelectorAll("label")].find((l) => l.textContent?.trim().startsWith("Gross trailer weight"));
+      const field = document.getElementById(input!.htmlFor) as HTMLInputElement;
+      const panel = () => document.querySelector("[data-evaluated-at]") as HTMLElement;
+      const setter = Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, "value")!.set!;
+      const results: number[] = [];
+      for (let i = 0; i < 40; i++) {
+        const before = Number(panel().dataset.evaluatedAt);
+        const started = performance.now();
+        setter.call(field, String(5000 + i * 37));
+        field.dispatchEvent(new Event("input", { bubbles: true }));
+        while (Number(panel().dataset.evaluatedAt) === before) await new Promise((r) => setTimeout(r, 0));
+        results.push(Number(panel().dataset.evaluatedAt) - started);
+      }
+      return results;
+    });
+    const p95 = percentile(latencies, 95);
+    console.log(`input → verdict latency over ${latencies.length} changes: p50 ${percentile(latencies, 50).toFixed(2)} ms, p95 ${p95.toFixed(2)} ms`);
+    expect(p95).toBeLessThan(16);
+  });
+
+  it("saves the check with the customer's name", async () => {
+    const { page } = staff;
+    await page.getByLabel("Gross trailer weight").fill("6200");
+    const before = await countSavedChecks();
+    await page.getByLabel("Customer name (optional)").fill("Hollis Ambersmith");
+    await page.getByRole("button", { name: "Save check" }).click();
+    await page.getByRole("link", { name: "Open the saved check" }).click();
+    await page.waitForURL(/\/checks\/[A-Za-z0-9_-]+$/);
+    checkUrl = page.url();
+    expect(await countSavedChecks()).toBe(before + 1);
+    await page.getByText("for Hollis Ambersmith").first().waitFor();
+    await page.goto("/checks");
+    await page.getByRole("cell", { name: "Hollis Ambersmith" }).waitFor();
+    await page.getByLabel("Customer").fill("ambersmith");
+    await expect.poll(() => page.locator("tbody tr").count()).toBe(1);
+    await screenshot(page, "saved-checks-desktop");
+  });
+
+  it("makes a customer link with a QR code and mails it", async () => {
+    const { page } = staff;
+    await page.goto(checkUrl);
+    await page.getByRole("button", { name: "Make a customer link" }).click();
+    const link = page.getByLabel("Customer link");
+    await link.waitFor();
+    linkUrl = await link.inputValue();
+    expect(linkUrl).toMatch(/\/r\/[A-Za-z0-9_-]{32}$/);
+    await expect(page.getByRole("img", { name: "QR code of the customer link" }).locator("svg").count()).resolves.toBe(1);
+    await page.getByLabel("Customer's e-mail").fill("hollis@ambersmith.example.com");
+    await page.getByRole("button", { name: "E-mail the link" }).click();
+    const mail = await latestMailTo("hollis@ambersmith.example.com");
+    expect(mail.subject).toBe("Your towing check from Quillfield Hitch & Trailer");
+    expect(firstLink(mail.text, "/r/")).toBe(linkUrl);
+    expect(mail.html).toContain(linkUrl);
+    await screenshot(page, "saved-check-desktop");
+  });
+
+  it("opens signed out on a phone: the shop, the verdict and the cautions, not indexed", async () => {
+    const { page } = customer;
+    const response = await page.goto(linkUrl);
+    expect(response?.status()).toBe(200);
+    expect(response?.headers()["x-robots-tag"]).toContain("noindex");
+    await page.getByText("Quillfield Hitch & Trailer").first().waitFor();
+    await expect(page.getByText("Hollis Ambersmith").first().isVisible()).resolves.toBe(true);
+    await expect(page.getByText(/lowest one governs|lowest rating/i).first().isVisible()).resolves.toBe(true);
+    // No way into the shop's data from here.
+    await expect(page.getByRole("link", { name: /saved checks|team|overview/i }).count()).resolves.toBe(0);
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+    await screenshot(page, "customer-link-phone");
+  });
+
+  it("withdrawn, the link shows a clear page with a 404 and no data", async () => {
+    await staff.page.goto(checkUrl);
+    await staff.page.getByRole("button", { name: /Withdraw the link ending/ }).first().click();
+    await staff.page.getByRole("cell", { name: "Withdrawn" }).waitFor();
+    const response = await customer.page.goto(linkUrl);
+    expect(response?.status()).toBe(404);
+    await expect(customer.page.getByText("Hollis Ambersmith").count()).resolves.toBe(0);
+    await expect(customer.page.getByText("Quillfield Hitch & Trailer").count()).resolves.toBe(0);
+    await screenshot(customer.page, "customer-link-gone-phone");
+  });
+});
+
+describe("the quick check, signed out", () => {
+  it("gives a verdict in the browser and saves nothing", async () => {
+    const session = await openBrowser(PHONE);
+    try {
+      const { page } = session;
+      const before = await countSavedChecks();
+      await page.goto("/quick-check");
+      await page.getByLabel("Try an example").selectOption({ index: 1 });
+      await expect.poll(() => page.getByTestId("verdict-level").first().getAttribute("data-level")).toMatch(/within|tight|over/);
+      await expect(page.getByRole("button", { name: "Save check" }).count()).resolves.toBe(0);
+      await screenshot(page, "quick-check-phone");
+      expect(await countSavedChecks()).toBe(before);
+    } finally {
+      await session.close();
+    }
+  });
+});
