@@ -48,6 +48,14 @@ function ChartFrame({ title, summary, height, children }: { title: string; summa
 
 const tickOf = (unit: UnitString) => (v: number) => formatNumber(v, unit);
 
+/**
+ * Charts redraw only when what they draw changes: a new result object arrives on every keystroke, but most
+ * keystrokes leave most charts' figures alone, and a recharts redraw costs more than the whole evaluation.
+ */
+function sameDrawing<P>(key: (props: P) => unknown) {
+  return (a: P, b: P) => JSON.stringify(key(a)) === JSON.stringify(key(b));
+}
+
 function RatingGroup({ title, links, governingId, unit }: { title: string; links: Link[]; governingId?: string; unit: UnitString }) {
   const load = links.find((l) => l.actual)?.actual;
   const data = links.map((l) => ({
@@ -95,7 +103,7 @@ export const RatingsChart = memo(function RatingsChart({ check }: { check: Weake
       {tw.length ? <RatingGroup title="Tongue weight ratings" links={tw} governingId={check.governingTongueWeight?.id} unit={unit} /> : null}
     </div>
   );
-});
+}, sameDrawing(({ check }: { check: WeakestLinkResult }) => [check.links, check.governingGrossTrailerWeight?.id, check.governingTongueWeight?.id]));
 
 /** The tongue's share of the trailer against the band it should sit in. */
 export const TongueShareChart = memo(function TongueShareChart({ check }: { check: TongueShareResult }) {
@@ -121,7 +129,7 @@ export const TongueShareChart = memo(function TongueShareChart({ check }: { chec
       </ResponsiveContainer>
     </ChartFrame>
   );
-});
+}, sameDrawing(({ check }: { check: TongueShareResult }) => [check.share, check.band, check.status]));
 
 /** Each axle unhitched, hitched and with weight distribution, against its GAWR. */
 export const AxleChart = memo(function AxleChart({ check, gawrFront, gawrRear }: { check: AxleLoadsResult; gawrFront?: number; gawrRear?: number }) {
@@ -166,7 +174,7 @@ export const AxleChart = memo(function AxleChart({ check, gawrFront, gawrRear }:
       })}
     </div>
   );
-});
+}, sameDrawing((p: { check: AxleLoadsResult; gawrFront?: number; gawrRear?: number }) => [p.check.unhitched, p.check.hitched, p.check.withWd, p.gawrFront, p.gawrRear]));
 
 /**
  * The allowed region of gross trailer weight × tongue weight: under the lowest limits of each, between the
@@ -232,4 +240,4 @@ export const EnvelopeChart = memo(function EnvelopeChart({ check, point }: { che
       </ResponsiveContainer>
     </ChartFrame>
   );
-});
+}, sameDrawing((p: { check: EnvelopeResult; point?: { grossTrailerWeight: number; tongueWeight: number } }) => [p.check.region, p.check.lines, p.check.status, p.check.maxGrossTrailerWeight, p.check.maxTongueWeight, p.point]));

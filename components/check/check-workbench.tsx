@@ -5,7 +5,7 @@
  * recomputed in the browser on every keystroke that leaves the inputs valid. The core runs synchronously on
  * the parsed values; the last good verdict stays up, marked as waiting, while a field is invalid.
  */
-import { useCallback, useMemo, useRef, useState, type FormEvent } from "react";
+import { useCallback, useDeferredValue, useMemo, useRef, useState, type FormEvent } from "react";
 import Link from "next/link";
 import { FormProvider, useForm, useWatch, type Control, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
@@ -105,7 +105,9 @@ function LiveVerdict({ control, kind, tightMarginRatio, onJump }: LiveProps) {
   if (evaluated) lastGood.current = evaluated;
   const shown = evaluated ?? lastGood.current;
   const [open, setOpen] = useState(false);
-  const sideRig = useMemo(() => (toRigCandidate(values, kind) as RigInput) ?? null, [values, kind]);
+  // The drawing follows a moment after the verdict (a deferred render), so typing never waits for it.
+  const deferredValues = useDeferredValue(values);
+  const sideRig = useMemo(() => toRigCandidate(deferredValues, kind) as RigInput, [deferredValues, kind]);
   if (!shown) return null;
   const { result, rig } = shown;
   const level = result.verdict.level;

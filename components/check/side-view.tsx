@@ -131,7 +131,7 @@ function SideViewImpl({ rig, kind, accessoryAngle, className }: SideViewProps) {
 
   // Scene extent in inches, then one scale for both axes.
   const minX = -R - 6;
-  const maxX = Math.max(pin + 18, (ballX ?? 0) + 14, (lowX ?? 0) + 16, accPin + 30);
+  const maxX = Math.max(pin + 18, (ballX ?? 0) + 14, (lowX ?? 0) + 30, accPin + 30);
   const maxY = Math.max(recv + (kind === "accessory" ? 40 : 22), 2 * R + 8);
   const pad = { left: 8, right: 8, top: 14, bottom: 30 };
   const s = Math.max(1, (width - pad.left - pad.right) / (maxX - minX));

@@ -5,7 +5,7 @@
  * a row (figures, margin bar, what to do, worked steps), the cautions, then the charts. Takes a result only
  * (and, optionally, the rig for the axle ratings), so any screen can show it.
  */
-import { memo, useLayoutEffect, useRef } from "react";
+import { memo, useDeferredValue, useLayoutEffect, useRef, useState, type ReactNode } from "react";
 import dynamic from "next/dynamic";
 import { ChevronRight } from "lucide-react";
 import { VerdictBadge, cn, verdictWords } from "@/components/ui";
@@ -125,6 +125,20 @@ function PartsTable({ check }: { check: AccessoryFitResult }) {
   );
 }
 
+/**
+ * A disclosure whose content is built only once it is opened: the worked steps of ten checks are most of the
+ * panel's markup, and rebuilding them on every keystroke while closed would cost more than the evaluation.
+ */
+function LazyDetails({ summary, children, className }: { summary: ReactNode; children: () => ReactNode; className?: string }) {
+  const [open, setOpen] = useState(false);
+  return (
+    <details className={cn("group", className)} onToggle={(e) => setOpen(e.currentTarget.open)}>
+      {summary}
+      {open ? children() : null}
+    </details>
+  );
+}
+
 function CheckRow({ check }: { check: AnyCheckResult }) {
   const missingLines = new Set((check.missing ?? []).map((m) => `${m.what}: ${m.where}.`));
   const advice = check.advice.filter((a) => !missingLines.has(a));
@@ -170,11 +184,15 @@ function CheckRow({ check }: { check: AnyCheckResult }) {
           </ul>
         </div>
       ) : null}
-      <details className="group">
-        <summary className="inline-flex min-h-9 cursor-pointer list-none items-center gap-1.5 rounded text-[0.8125rem] font-medium text-accent-strong select-none [&::-webkit-details-marker]:hidden">
-          <ChevronRight aria-hidden="true" className="size-4 transition-transform group-open:rotate-90 motion-reduce:transition-none" />
-          How it is worked out{check.steps.length ? ` (${check.steps.length} step${check.steps.length > 1 ? "s" : ""})` : ""}
-        </summary>
+      <LazyDetails
+        summary={
+          <summary className="inline-flex min-h-9 cursor-pointer list-none items-center gap-1.5 rounded text-[0.8125rem] font-medium text-accent-strong select-none [&::-webkit-details-marker]:hidden">
+            <ChevronRight aria-hidden="true" className="size-4 transition-transform group-open:rotate-90 motion-reduce:transition-none" />
+            How it is worked out{check.steps.length ? ` (${check.steps.length} step${check.steps.length > 1 ? "s" : ""})` : ""}
+          </summary>
+        }
+      >
+        {() => (
         <div className="mt-2 space-y-3 border-l-2 border-rule pl-3">
           <WorkedSteps steps={check.steps} />
           {check.cautions.length ? (
@@ -185,12 +203,16 @@ function CheckRow({ check }: { check: AnyCheckResult }) {
             </ul>
           ) : null}
         </div>
-      </details>
+        )}
+      </LazyDetails>
     </li>
   );
 }
 
-function Charts({ result, rig }: { result: RigResult; rig?: RigInput }) {
+/** The charts follow the verdict a moment later (a deferred render), so a keystroke never waits for them. */
+function Charts(props: { result: RigResult; rig?: RigInput }) {
+  const result = useDeferredValue(props.result);
+  const rig = useDeferredValue(props.rig);
   const weakest = result.checks.find(isWeakestLink);
   const share = result.checks.find((c): c is TongueShareResult => c.id === "tongue-share");
   const axles = result.checks.find((c): c is AxleLoadsResult => c.id === "axle-loads");

@@ -1,6 +1,6 @@
 // @vitest-environment happy-dom
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { cleanup, render, screen, within } from "@testing-library/react";
+import { act, cleanup, render, screen, within } from "@testing-library/react";
 import { VerdictPanel } from "@/components/check/verdict-panel";
 import { verdictWords } from "@/components/ui";
 import { evaluateRig, GENERAL_CAUTIONS, parseRig, type RigInput } from "@/lib/towing";
@@ -84,6 +84,12 @@ describe("VerdictPanel", () => {
     const details = weakest.querySelector("details")!;
     expect(details.open).toBe(false);
     expect(within(details).getByText(/How it is worked out \(\d+ steps\)/)).toBeTruthy();
+    // Built when opened, not before.
+    expect(within(details).queryByRole("heading", { name: /Lowest gross trailer weight rating/ })).toBeNull();
+    act(() => {
+      details.open = true;
+      details.dispatchEvent(new Event("toggle"));
+    });
     const step = within(details).getByRole("heading", { name: /Lowest gross trailer weight rating/ });
     expect(step.closest("details")).toBe(details);
     expect(within(details).getAllByText(/GTW_max = min\(/).length).toBe(1);
