@@ -44,7 +44,7 @@ describe("the counter check, saved, shared and withdrawn", () => {
     await expect.poll(() => verdict.getAttribute("data-level")).not.toBe("over");
     await screenshot(page, "check-desktop");
 
-    const gross = page.getByLabel("Gross trailer weight");
+    const gross = page.getByLabel("Gross trailer weight", { exact: true });
     await gross.fill("11500");
     await expect.poll(() => verdict.getAttribute("data-level")).toBe("over");
     await expect.poll(() => page.getByTestId("check-weakest-link").first().getAttribute("data-status")).toBe("over");
@@ -77,7 +77,7 @@ describe("the counter check, saved, shared and withdrawn", () => {
 
   it("saves the check with the customer's name", async () => {
     const { page } = staff;
-    await page.getByLabel("Gross trailer weight").fill("6200");
+    await page.getByLabel("Gross trailer weight", { exact: true }).fill("6200");
     const before = await countSavedChecks();
     await page.getByLabel("Customer name (optional)").fill("Hollis Ambersmith");
     await page.getByRole("button", { name: "Save check" }).click();
@@ -97,7 +97,7 @@ describe("the counter check, saved, shared and withdrawn", () => {
     const { page } = staff;
     await page.goto(checkUrl);
     await page.getByRole("button", { name: "Make a customer link" }).click();
-    const link = page.getByLabel("Customer link");
+    const link = page.getByLabel("Customer link", { exact: true });
     await link.waitFor();
     linkUrl = await link.inputValue();
     expect(linkUrl).toMatch(/\/r\/[A-Za-z0-9_-]{32}$/);
