@@ -125,14 +125,14 @@ export function ResultReport({ shopName, createdAt, customerName, rig, result, q
       <header className="flex items-start justify-between gap-4 border-b border-rule pb-4 print:pb-1">
         <div className="min-w-0 print:flex print:flex-1 print:items-end print:justify-between print:gap-6">
           <div className="min-w-0">
-            <p className="text-xs font-medium tracking-wide text-ink-faint uppercase print:hidden">Hitch fit report</p>
+            <p className="text-xs font-medium tracking-wide text-ink-faint uppercase print:hidden">Towing check</p>
             <h1 id="report-title" className="mt-0.5 text-xl leading-tight font-semibold break-words sm:text-2xl print:text-[13pt]">
               {shopName}
             </h1>
           </div>
           <div className="mt-1 text-sm text-ink-soft print:mt-0 print:text-right print:text-[8pt]">
             <p>
-              <span className="hidden print:inline">Hitch fit report · </span>
+              <span className="hidden print:inline">Towing check · </span>
               Checked on <time dateTime={createdAt.toISOString()}>{date}</time>
             </p>
             {customerName ? <p>Prepared for {customerName}</p> : null}

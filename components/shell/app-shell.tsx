@@ -58,7 +58,7 @@ export function AppShell({ access, mailbox, children }: { access: AccessContext;
           </div>
         ) : null}
       </header>
-      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:px-6 sm:py-8">
+      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:px-6 sm:py-8 print:max-w-none print:p-0">
         {children}
       </main>
     </div>

@@ -2,7 +2,7 @@
 import Link from "next/link";
 import { useState } from "react";
 import useSWR from "swr";
-import { Button, Card, EmptyRow, Field, Select, TBody, TD, TH, THead, TR, Table, TextInput, VerdictBadge, buttonClasses } from "@/components/ui";
+import { Button, Card, EmptyRow, Field, Select, TBody, TD, TH, THead, TR, Table, TextInput, VerdictBadge } from "@/components/ui";
 import { fetchJson } from "@/lib/client/fetcher";
 import { checksKey } from "@/lib/client/keys";
 import type { CheckListPage } from "@/lib/server/checks";
@@ -105,11 +105,6 @@ export function ChecksTable({ initial, initialKey }: { initial: CheckListPage; i
           </div>
         </div>
       </Card>
-      <p className="text-sm">
-        <Link href="/check" className={buttonClasses({ variant: "primary" })}>
-          Check a new rig
-        </Link>
-      </p>
     </div>
   );
 }

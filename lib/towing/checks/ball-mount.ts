@@ -90,7 +90,7 @@ export function checkBallMount(d: Derived, c: Ctx): BallMountResult | null {
   result.cautions = CAUTIONS;
   const advice: string[] = [];
   const word = (x: number) => wordFor(c, x);
-  if (needed !== undefined && (drop === undefined || !lessOrEqual(Math.abs(drop - needed), LEVEL_TOLERANCE_IN)))
+  if (needed !== undefined && (drop === undefined || !lessOrEqual(Math.abs(drop - needed), LEVEL_TOLERANCE_IN) || result.status === "tight"))
     advice.push(`Use a ball mount with a ${word(nearestCommonDrop(needed))} (nearest common size).`);
   for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
   result.advice = advice;
@@ -101,6 +101,8 @@ export function checkBallMount(d: Derived, c: Ctx): BallMountResult | null {
         ? `A ${word(needed)} keeps the trailer level; the nearest common size is a ${word(nearestCommonDrop(needed))}.`
         : result.status === "over"
           ? `The ball mount's ${word(drop)} leaves the trailer ${fL(c, Math.abs(drop - needed))} off level; a ${word(needed)} is needed.`
+          : result.status === "tight"
+            ? `The ball mount's ${word(drop)} leaves the trailer ${fL(c, Math.abs(drop - needed))} off level, at the edge of the ${fL(c, LEVEL_TOLERANCE_IN)} allowed; a ${word(needed)} would level it.`
           : Math.abs(drop - needed) < 0.05
             ? `The ball mount's ${word(drop)} keeps the trailer level.`
             : `The ball mount's ${word(drop)} keeps the trailer within ${fL(c, Math.abs(drop - needed))} of level.`;

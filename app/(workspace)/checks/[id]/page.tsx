@@ -3,6 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { VerdictPanel } from "@/components/check/verdict-panel";
 import { PrintButton } from "@/components/report/print-button";
+import { ResultReport } from "@/components/report/result-report";
 import { Card, CardBody, CardHeader, PageHeader, buttonClasses } from "@/components/ui";
 import { can } from "@/lib/roles";
 import { requirePage } from "@/lib/server/access";
@@ -22,21 +23,26 @@ export default async function SavedCheckPage({ params }: { params: Promise<{ id:
   if (!check) notFound();
   const links = await listShareLinks(access, check.id);
   return (
-    <div className="flex flex-col gap-6">
+    <>
+    {/* On paper the check prints as the customer's one-sheet report. */}
+    <div className="hidden print:block">
+      <ResultReport shopName={access.organisation.name} createdAt={check.createdAt} customerName={check.customerName} rig={check.rig} result={check.result} />
+    </div>
+    <div className="flex flex-col gap-6 print:hidden">
       <PageHeader
         eyebrow={
           <Link href="/checks" className="underline">
             Saved checks
           </Link>
         }
-        title={`${check.vehicleLabel ?? "Vehicle"} with ${(check.hitchedLabel ?? "a load").toLowerCase()}`}
+        title={`${check.vehicleLabel ?? "Vehicle"} · ${check.hitchedLabel ?? "nothing hitched"}`}
         description={`Saved ${when.format(check.createdAt)}${check.customerName ? ` for ${check.customerName}` : ""}. Computed by Towmargin core ${check.coreVersion}; this snapshot never changes.`}
         actions={
           <>
             <Link href={`/check?from=${check.id}`} className={buttonClasses({ variant: "secondary" })}>
               Duplicate and change
             </Link>
-            <PrintButton />
+            <PrintButton className={buttonClasses({ variant: "secondary", className: "[&_svg]:size-4" })} />
           </>
         }
       />
@@ -67,7 +73,8 @@ export default async function SavedCheckPage({ params }: { params: Promise<{ id:
           />
         </CardBody>
       </Card>
-      <VerdictPanel result={check.result} />
+      <VerdictPanel result={check.result} rig={check.rig} />
     </div>
+    </>
   );
 }
