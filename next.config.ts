@@ -1,6 +1,8 @@
 import type { NextConfig } from "next";
 
 const nextConfig: NextConfig = {
+  // Separate build folders let several builds of one tree live side by side (NEXT_DIST_DIR=.next-other).
+  distDir: process.env.NEXT_DIST_DIR || ".next",
   experimental: { authInterrupts: true },
   poweredByHeader: false,
   reactStrictMode: true,

@@ -202,3 +202,108 @@ export const shareLinks = sqliteTable(
 
 export type SavedCheck = typeof savedChecks.$inferSelect;
 export type ShareLink = typeof shareLinks.$inferSelect;
+
+/** A photo or PDF of a label, kept with a vehicle profile. The bytes live in the storage module. */
+export const vehicleDocuments = sqliteTable(
+  "vehicle_documents",
+  {
+    id: text("id").primaryKey(),
+    organisationId: text("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    vehicleProfileId: text("vehicle_profile_id")
+      .notNull()
+      .references(() => vehicleProfiles.id, { onDelete: "cascade" }),
+    kind: text("kind", { enum: ["door-jamb-label", "hitch-label", "other"] }).notNull(),
+    fileName: text("file_name").notNull(),
+    /** Detected from the file's content, not its name. */
+    contentType: text("content_type").notNull(),
+    sizeBytes: integer("size_bytes").notNull(),
+    storageKey: text("storage_key").notNull(),
+    uploadedByUserId: text("uploaded_by_user_id").references(() => users.id, { onDelete: "set null" }),
+    createdAt: timestampNow(),
+  },
+  (table) => [index("vehicle_documents_vehicle_idx").on(table.vehicleProfileId)],
+);
+
+/**
+ * A worked example for training: a rig, a short story, and the check it teaches. The steps come from the
+ * core when the lesson is shown, so a lesson always agrees with what the counter sees.
+ */
+export const lessons = sqliteTable(
+  "lessons",
+  {
+    id: text("id").primaryKey(),
+    organisationId: text("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    authorUserId: text("author_user_id").references(() => users.id, { onDelete: "set null" }),
+    title: text("title").notNull(),
+    story: text("story").notNull(),
+    question: text("question").notNull(),
+    /** The check family the lesson is about (a core check id). */
+    checkId: text("check_id").notNull(),
+    /** The rule the example illustrates, in a sentence. */
+    rule: text("rule").notNull(),
+    rig: text("rig", { mode: "json" }).notNull(),
+    /** draft: authors only; organisation: every member; public: anyone with the link. */
+    visibility: text("visibility", { enum: ["draft", "organisation", "public"] }).notNull().default("draft"),
+    /** SHA-256 of the public link's token; null until published publicly. */
+    publicTokenHash: text("public_token_hash").unique(),
+    sourceCheckId: text("source_check_id").references(() => savedChecks.id, { onDelete: "set null" }),
+    createdAt: timestampNow(),
+    updatedAt: timestampNow("updated_at"),
+  },
+  (table) => [index("lessons_org_idx").on(table.organisationId)],
+);
+
+export const courses = sqliteTable(
+  "courses",
+  {
+    id: text("id").primaryKey(),
+    organisationId: text("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    title: text("title").notNull(),
+    description: text("description").notNull().default(""),
+    createdByUserId: text("created_by_user_id").references(() => users.id, { onDelete: "set null" }),
+    createdAt: timestampNow(),
+  },
+  (table) => [index("courses_org_idx").on(table.organisationId)],
+);
+
+export const courseLessons = sqliteTable(
+  "course_lessons",
+  {
+    courseId: text("course_id")
+      .notNull()
+      .references(() => courses.id, { onDelete: "cascade" }),
+    lessonId: text("lesson_id")
+      .notNull()
+      .references(() => lessons.id, { onDelete: "cascade" }),
+    position: integer("position").notNull(),
+  },
+  (table) => [uniqueIndex("course_lessons_pk").on(table.courseId, table.lessonId)],
+);
+
+/** One learner's answers to one lesson's steps, marked within a tolerance. */
+export const practiceAttempts = sqliteTable(
+  "practice_attempts",
+  {
+    id: text("id").primaryKey(),
+    organisationId: text("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    lessonId: text("lesson_id")
+      .notNull()
+      .references(() => lessons.id, { onDelete: "cascade" }),
+    userId: text("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    answers: text("answers", { mode: "json" }).notNull(),
+    correct: integer("correct").notNull(),
+    total: integer("total").notNull(),
+    createdAt: timestampNow(),
+  },
+  (table) => [index("practice_attempts_lesson_idx").on(table.lessonId), index("practice_attempts_user_idx").on(table.userId)],
+);

@@ -13,6 +13,8 @@ export const NAV_ITEMS: NavItem[] = [
   { href: "/overview", label: "Overview" },
   { href: "/check", label: "Check a rig", permission: "checks.run" },
   { href: "/checks", label: "Saved checks", permission: "checks.run" },
+  { href: "/fleet", label: "Fleet", permission: "fleet.read" },
+  { href: "/training", label: "Training", permission: "training.practise" },
   { href: "/team", label: "Team", permission: "team.manage" },
   { href: "/settings", label: "Organisation", permission: "organisation.manage" },
   { href: "/mailbox", label: "Mailbox", permission: "mailbox.read", devOnly: true },

@@ -46,7 +46,7 @@ describe("signing up", () => {
     await page.getByRole("button", { name: "Finish signing up" }).click();
     await page.waitForURL(/\/overview/);
     await expect(page.getByRole("heading", { level: 1 }).innerText()).resolves.toBe("Hello, Odile Fenwright");
-    expect(await navLabels(page)).toEqual(["Overview", "Check a rig", "Saved checks", "Team", "Organisation", "Mailbox"]);
+    expect(await navLabels(page)).toEqual(["Overview", "Check a rig", "Saved checks", "Fleet", "Training", "Team", "Organisation", "Mailbox"]);
   });
 
   it("answers the same for an address that already has an account", async () => {
@@ -67,10 +67,10 @@ describe("signing up", () => {
 
 describe("signing in with each role", () => {
   const cases = [
-    { who: "owner", email: DEMO.owner, nav: ["Overview", "Check a rig", "Saved checks", "Team", "Organisation", "Mailbox"], role: "Owner" },
-    { who: "counter staff", email: DEMO.staff, nav: ["Overview", "Check a rig", "Saved checks"], role: "Counter staff" },
-    { who: "trainer", email: DEMO.trainer, nav: ["Overview", "Check a rig", "Saved checks"], role: "Trainer" },
-    { who: "fleet manager", email: DEMO.fleetManager, nav: ["Overview", "Check a rig", "Saved checks"], role: "Fleet manager" },
+    { who: "owner", email: DEMO.owner, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training", "Team", "Organisation", "Mailbox"], role: "Owner" },
+    { who: "counter staff", email: DEMO.staff, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training"], role: "Counter staff" },
+    { who: "trainer", email: DEMO.trainer, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training"], role: "Trainer" },
+    { who: "fleet manager", email: DEMO.fleetManager, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training"], role: "Fleet manager" },
   ];
 
   for (const { who, email, nav, role } of cases) {
@@ -189,7 +189,7 @@ describe("inviting a member", () => {
       await screenshot(invitee.page, "invitation-phone");
       await invitee.page.getByRole("button", { name: "Join" }).click();
       await invitee.page.waitForURL(/\/overview/);
-      expect(await navLabels(invitee.page)).toEqual(["Overview", "Check a rig", "Saved checks"]);
+      expect(await navLabels(invitee.page)).toEqual(["Overview", "Check a rig", "Saved checks", "Fleet", "Training"]);
       await expect(invitee.page.getByText("You have joined Quillfield Hitch & Trailer.").isVisible()).resolves.toBe(true);
 
       // The link works once.

@@ -21,8 +21,8 @@ describe("roles", () => {
   });
 
   it("navigation follows the permissions, and the mailbox only where it is switched on", () => {
-    expect(navigationFor("owner", { mailbox: true }).map((i) => i.href)).toEqual(["/overview", "/check", "/checks", "/team", "/settings", "/mailbox"]);
-    expect(navigationFor("owner", { mailbox: false }).map((i) => i.href)).toEqual(["/overview", "/check", "/checks", "/team", "/settings"]);
-    expect(navigationFor("staff", { mailbox: true }).map((i) => i.href)).toEqual(["/overview", "/check", "/checks"]);
+    expect(navigationFor("owner", { mailbox: true }).map((i) => i.href)).toEqual(["/overview", "/check", "/checks", "/fleet", "/training", "/team", "/settings", "/mailbox"]);
+    expect(navigationFor("owner", { mailbox: false }).map((i) => i.href)).toEqual(["/overview", "/check", "/checks", "/fleet", "/training", "/team", "/settings"]);
+    expect(navigationFor("staff", { mailbox: true }).map((i) => i.href)).toEqual(["/overview", "/check", "/checks", "/fleet", "/training"]);
   });
 });
