@@ -1,10 +1,8 @@
 "use client";
-import { useActionState } from "react";
 import { useActionForm } from "@/components/forms/use-action-form";
 import { Button, Field, FormMessage, TextInput } from "@/components/ui";
 import { acceptInvitationSchema } from "@/lib/validation/auth";
-import { initialFormState } from "@/lib/validation/form-state";
-import { acceptAsNewMember, acceptAsSignedIn } from "./actions";
+import { acceptAsNewMember } from "./actions";
 
 export function NewMemberForm({ token, email }: { token: string; email: string }) {
   const { form, state, pending, formAction, onSubmit, errorOf } = useActionForm(acceptInvitationSchema, acceptAsNewMember, {
@@ -27,19 +25,6 @@ export function NewMemberForm({ token, email }: { token: string; email: string }
       </Field>
       <Button type="submit" loading={pending} className="w-full">
         Join
-      </Button>
-    </form>
-  );
-}
-
-export function AcceptAsSignedInForm({ token }: { token: string }) {
-  const [state, formAction, pending] = useActionState(acceptAsSignedIn, initialFormState);
-  return (
-    <form action={formAction} className="flex flex-col gap-4">
-      <FormMessage tone="error">{state.message}</FormMessage>
-      <input type="hidden" name="token" value={token} />
-      <Button type="submit" loading={pending} className="w-full">
-        Accept and join
       </Button>
     </form>
   );

@@ -5,7 +5,9 @@ import { buttonClasses } from "@/components/ui";
 import { ROLE_DESCRIPTIONS, ROLE_LABELS } from "@/lib/roles";
 import { getCurrentSession } from "@/lib/server/session";
 import { findOpenInvitation } from "@/lib/server/team";
-import { AcceptAsSignedInForm, NewMemberForm } from "./invite-forms";
+import { TokenButtonForm } from "@/components/forms/token-button-form";
+import { acceptAsSignedIn } from "./actions";
+import { NewMemberForm } from "./invite-forms";
 
 export const metadata: Metadata = { title: "Invitation", robots: { index: false } };
 
@@ -28,7 +30,7 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
   if (user && user.email === invitation.email) {
     return (
       <AuthPanel title={title} intro={intro}>
-        <AcceptAsSignedInForm token={token} />
+        <TokenButtonForm token={token} label="Accept and join" action={acceptAsSignedIn} />
       </AuthPanel>
     );
   }

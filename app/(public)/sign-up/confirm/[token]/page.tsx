@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { AuthPanel } from "@/components/auth-panel";
-import { ConfirmSignupForm } from "./confirm-form";
+import { TokenButtonForm } from "@/components/forms/token-button-form";
+import { finishSignup } from "../../actions";
 
 export const metadata: Metadata = { title: "Finish signing up", robots: { index: false } };
 
@@ -9,7 +10,7 @@ export default async function ConfirmSignupPage({ params }: { params: Promise<{ 
   const { token } = await params;
   return (
     <AuthPanel title="One step left" intro="Your address is confirmed by this link. Press the button to create your organisation and sign in.">
-      <ConfirmSignupForm token={token} />
+      <TokenButtonForm token={token} label="Finish signing up" action={finishSignup} />
     </AuthPanel>
   );
 }
