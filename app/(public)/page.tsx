@@ -25,6 +25,9 @@ export default function LandingPage() {
         <Link href="/sign-up" className={buttonClasses({ variant: "secondary" })}>
           Set up your shop or fleet
         </Link>
+        <Link href="/quick-check" className={buttonClasses({ variant: "quiet" })}>
+          Try a quick check, no account
+        </Link>
       </div>
       <dl className="mt-14 grid gap-4 sm:grid-cols-3">
         {figures.map((figure) => (

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { Card, CardBody, CardHeader, FormMessage, PageHeader } from "@/components/ui";
+import { Card, CardBody, CardHeader, FormMessage, PageHeader, buttonClasses } from "@/components/ui";
 import { ROLE_DESCRIPTIONS, ROLE_LABELS, can } from "@/lib/roles";
 import { requirePage } from "@/lib/server/access";
 
@@ -21,7 +21,18 @@ export default async function OverviewPage({ searchParams }: { searchParams: Pro
   const { organisation, role } = access;
   return (
     <div className="flex flex-col gap-6">
-      <PageHeader eyebrow={organisation.kind === "shop" ? "Hitch shop" : "Fleet"} title={`Hello, ${access.user.name}`} description={`${ROLE_LABELS[role]} at ${organisation.name}. ${ROLE_DESCRIPTIONS[role]}`} />
+      <PageHeader
+        eyebrow={organisation.kind === "shop" ? "Hitch shop" : "Fleet"}
+        title={`Hello, ${access.user.name}`}
+        description={`${ROLE_LABELS[role]} at ${organisation.name}. ${ROLE_DESCRIPTIONS[role]}`}
+        actions={
+          can(role, "checks.run") ? (
+            <Link href="/check" className={buttonClasses({ variant: "primary" })}>
+              Check a rig
+            </Link>
+          ) : null
+        }
+      />
       {greeting ? <FormMessage tone="success">{greeting}</FormMessage> : null}
       <div className="grid gap-4 md:grid-cols-2">
         <Card>
