@@ -1,0 +1,198 @@
+/**
+ * The built-in library of worked examples: one per check family, set in an invented valley town, Brackenfold,
+ * whose people, vehicles and trailers are all made up. Readable by every organisation; authors copy an example
+ * into their own lessons and change it there. Each example's key figure is checked against its published source
+ * or a physics derivation in tests/unit/training/library.test.ts.
+ */
+import type { RigInput } from "@/lib/towing/input";
+import type { CheckId } from "@/lib/towing/types";
+
+/** The check families a lesson can be about, with the words a trainer uses for them. */
+export const LESSON_FAMILIES = [
+  { id: "weakest-link", label: "Weakest link" },
+  { id: "tongue-share", label: "Tongue-weight share" },
+  { id: "tongue-measure", label: "Measuring tongue weight" },
+  { id: "payload", label: "Payload" },
+  { id: "combined-weight", label: "Combined weight" },
+  { id: "axle-loads", label: "Axle loads" },
+  { id: "weight-distribution", label: "Weight-distribution restoration" },
+  { id: "ball-mount", label: "Ball-mount rise or drop" },
+  { id: "accessory-fit", label: "Accessory load and clearance" },
+  { id: "envelope", label: "What the rig can still take" },
+] as const satisfies ReadonlyArray<{ id: CheckId; label: string }>;
+
+export type LessonFamily = (typeof LESSON_FAMILIES)[number]["id"];
+export const LESSON_FAMILY_IDS = LESSON_FAMILIES.map((family) => family.id) as [LessonFamily, ...LessonFamily[]];
+
+export function familyLabel(id: string): string {
+  return LESSON_FAMILIES.find((family) => family.id === id)?.label ?? id;
+}
+
+export interface LibraryExample {
+  /** Stable, URL-safe: /training/library/<slug>. */
+  slug: string;
+  title: string;
+  story: string;
+  question: string;
+  checkId: LessonFamily;
+  rule: string;
+  rig: RigInput;
+  /** The step whose result is the example's key figure (what the tests check against the world). */
+  keyStep: string;
+}
+
+export const LIBRARY: readonly LibraryExample[] = [
+  {
+    slug: "lowest-rating-governs",
+    title: "The hitch, not the truck, sets the limit",
+    story:
+      "Tamsin Oakhollow runs a fencing crew out of Brackenfold. Her pickup's manual says it tows 7,000 lb, so she wants to pull a 4,600 lb utility trailer loaded with posts. The receiver bolted under the truck is a Class 3 hitch.",
+    question: "Which part limits the gross trailer weight, and how much room is left under it?",
+    checkId: "weakest-link",
+    rule: "Every part between the vehicle and the trailer has its own rating; the lowest one is the limit for the whole rig. A Class 3 receiver is rated for a gross trailer weight up to 5,000 lb (SAE J684).",
+    keyStep: "lowest-gtw-rating",
+    rig: {
+      units: "imperial",
+      name: "Tamsin's crew-cab pickup with the post trailer (invented)",
+      vehicle: { towRating: 7000, tongueWeightLimit: 700, gvwr: 6800, curbWeight: 4900 },
+      hitch: { class: 3, receiverSize: "2", gtwRating: 5000, twRating: 600 },
+      trailer: {
+        type: "utility",
+        grossTrailerWeight: 4600,
+        tongueWeight: 460,
+        tongueWeightBasis: "measured",
+        ballSize: "2",
+        couplerBallSize: "2",
+        ballRating: 6000,
+        couplerRating: 7000,
+        safetyChainRating: 6000,
+        brakes: "electric",
+      },
+      ballMount: { gtwRating: 6000, twRating: 600 },
+    },
+  },
+  {
+    slug: "too-light-on-the-tongue",
+    title: "A trailer that is too light on the tongue",
+    story:
+      "Jory Brannock loaded his landscaping trailer with the heavy roller at the very back so the ramp would drop easily. The trailer weighs 3,000 lb loaded; at the scale the tongue reads 270 lb.",
+    question: "What share of the trailer's weight is on the tongue, and is it inside the usual band?",
+    checkId: "tongue-share",
+    rule: "A conventional trailer should carry 10–15 % of its loaded weight on the tongue. Too little invites sway; too much overloads the rear axle and lightens the steering. Move the load forward, then weigh again.",
+    keyStep: "tongue-share",
+    rig: {
+      units: "imperial",
+      name: "Jory's half-ton pickup with the roller trailer (invented)",
+      vehicle: { towRating: 6500, tongueWeightLimit: 650 },
+      hitch: { class: 3, gtwRating: 5000, twRating: 500 },
+      trailer: { type: "utility", grossTrailerWeight: 3000, tongueWeight: 270, tongueWeightBasis: "measured" },
+    },
+  },
+  {
+    slug: "family-full-of-payload",
+    title: "Five seats, a cooler and a camper tongue",
+    story:
+      "The Velloway family bought a small travel trailer and will tow it with their three-row SUV: five people (750 lb together), 200 lb of luggage, a 40 lb ball mount, and 450 lb on the tongue. The door label gives a GVWR of 6,000 lb; the curb weight is 4,650 lb.",
+    question: "What is the SUV's payload capacity, and does the family's load fit in it?",
+    checkId: "payload",
+    rule: "Payload is GVWR minus curb weight (49 CFR 567.4(g)(3)). People, cargo, hitch hardware and the tongue weight all count against it.",
+    keyStep: "payload-capacity",
+    rig: {
+      units: "imperial",
+      name: "The Velloways' three-row SUV with a small camper (invented)",
+      vehicle: { towRating: 5000, tongueWeightLimit: 500, gvwr: 6000, curbWeight: 4650 },
+      trailer: { type: "travel", grossTrailerWeight: 4100, tongueWeight: 450, tongueWeightBasis: "measured" },
+      load: { occupants: 750, cargo: 200, hitchHardware: 40 },
+    },
+  },
+  {
+    slug: "count-the-tongue-once",
+    title: "Count the tongue weight once",
+    story:
+      "Perrin Ashdown hauls a skid steer on a 7,500 lb equipment trailer with a heavy-duty pickup (curb weight 5,400 lb). Two people ride (350 lb), 250 lb of tools are in the bed, and the hitch hardware weighs 60 lb. The truck's GCWR is 13,000 lb.",
+    question: "What does the whole combination weigh, and is it within the GCWR?",
+    checkId: "combined-weight",
+    rule: "Combined weight is the loaded tow vehicle plus the whole trailer. The tongue weight is already part of the trailer's weight: adding it again counts it twice. The combination must not exceed the GCWR.",
+    keyStep: "combined",
+    rig: {
+      units: "imperial",
+      name: "Perrin's heavy-duty pickup with the equipment trailer (invented)",
+      vehicle: { towRating: 9000, tongueWeightLimit: 900, gvwr: 8500, curbWeight: 5400, gcwr: 13000 },
+      trailer: { type: "car-hauler", grossTrailerWeight: 7500, tongueWeight: 900, tongueWeightBasis: "measured" },
+      load: { occupants: 350, cargo: 250, hitchHardware: 60 },
+    },
+  },
+  {
+    slug: "tongue-load-on-the-axles",
+    title: "Where an 800 lb tongue load really goes",
+    story:
+      "Marit Quenby weighed her pickup axle by axle before hitching: 3,100 lb front, 2,600 lb rear. The ball sits 50 in behind the rear axle, the wheelbase is 145 in, and her travel trailer puts 800 lb on the ball. She tows without weight distribution.",
+    question: "How much load does each axle gain or lose when the trailer is hitched?",
+    checkId: "axle-loads",
+    rule: "A tongue load behind the rear axle acts like a lever over it: the rear axle carries more than the tongue weight and the front axle is lifted. Rear gain = TW × (WB + OH) ÷ WB; front change = −TW × OH ÷ WB (statics, moments about the axles).",
+    keyStep: "rear-change",
+    rig: {
+      units: "imperial",
+      name: "Marit's pickup with a travel trailer (invented)",
+      vehicle: { gawrFront: 3700, gawrRear: 4000, axleWeights: { front: 3100, rear: 2600 }, wheelbase: 145, rearAxleToHitch: 50 },
+      trailer: { type: "travel", grossTrailerWeight: 6400, tongueWeight: 800, tongueWeightBasis: "measured" },
+    },
+  },
+  {
+    slug: "give-the-front-axle-back",
+    title: "Giving the front axle its load back",
+    story:
+      "Ysolde Farrant's camper squats her van's rear. With a tape at the front wheel arch she measured 1030 mm unhitched and 1058 mm hitched with the weight-distribution bars off. With the bars on it now reads 1046 mm. The maker asks for half of the lost front load to be given back.",
+    question: "What front fender height should the bars give, and how much of the lost load do they give back now?",
+    checkId: "weight-distribution",
+    rule: "Adjust weight distribution until the front fender sits at H1 + (H2 − H1) × (1 − target). Restoration = (H2 − H3) ÷ (H2 − H1); the usual target is 50 % (the SAE J2807 method as given in vehicle owner's manuals). Over 100 % unloads the rear.",
+    keyStep: "target-fender-height",
+    rig: {
+      units: "metric",
+      name: "Ysolde's van with a camper (invented)",
+      vehicle: { towRating: 3000, towRatingWd: 3500, tongueWeightLimit: 250, tongueWeightLimitWd: 350 },
+      hitch: { class: 3, gtwRatingWd: 3500, twRatingWd: 350, gtwRating: 2700, twRating: 270 },
+      trailer: { type: "travel", grossTrailerWeight: 2600, tongueWeight: 290, tongueWeightBasis: "measured" },
+      weightDistribution: { used: true, tongueRating: 450, fenderUnhitched: 1030, fenderHitched: 1058, fenderWithWd: 1046, restorationTarget: 50 },
+    },
+  },
+  {
+    slug: "riding-level",
+    title: "A ball mount that rides level",
+    story:
+      "Hollis Pendry's lifted pickup has the top of its receiver opening 26 in off the ground. His boat trailer's coupler sits 20 in up when the trailer is level. He brought the 4 in drop mount that came with the truck.",
+    question: "What drop does the ball mount need, and how far off level does the 4 in mount leave the trailer?",
+    checkId: "ball-mount",
+    rule: "Drop = height to the top of the receiver opening − height to the bottom of the coupler, with the trailer level (a negative answer is a rise). A trailer riding nose-up or nose-down shifts load and brakes unevenly.",
+    keyStep: "drop-needed",
+    rig: {
+      units: "imperial",
+      name: "Hollis's lifted pickup with a boat trailer (invented)",
+      vehicle: { towRating: 7500, tongueWeightLimit: 750 },
+      hitch: { class: 3, receiverHeight: 26, gtwRating: 5000, twRating: 500 },
+      trailer: { type: "boat", grossTrailerWeight: 3200, tongueWeight: 300, tongueWeightBasis: "measured", couplerHeight: 20 },
+      ballMount: { drop: 4 },
+    },
+  },
+  {
+    slug: "rack-that-scrapes",
+    title: "A bike rack that scrapes on the ramp",
+    story:
+      "Wren Calloway fitted a two-bike platform rack to her hatchback's receiver. The rack's lowest point sits 10 in off the ground and 30 in behind the rear axle. The car's departure angle is 21°, and the rack scraped on her steep driveway.",
+    question: "At what angle does the rack meet a ramp, and how much more rise would keep the car's departure angle?",
+    checkId: "accessory-fit",
+    rule: "A hitch-mounted load must not cut into the vehicle's departure angle (49 CFR 523.2): its lowest point at height h and distance x behind the rear tyre meets a slope of about atan(h ÷ x). Raise it with a rising shank, or choose a shorter rack.",
+    keyStep: "accessory-angle",
+    rig: {
+      units: "imperial",
+      name: "Wren's hatchback with a platform rack (invented)",
+      vehicle: { tongueWeightLimit: 200, gvwr: 4100, curbWeight: 3000, rearAxleToHitch: 22, departureAngle: 21 },
+      hitch: { class: 1, receiverSize: "1-1/4", gtwRating: 2000, twRating: 200, receiverHeight: 13, pinToFascia: 6 },
+      accessory: { type: "platform-rack", weight: 40, loadWeight: 60, loadCenterFromPin: 12, foldClearance: 4, lowestPointBelowShankTop: 3, lowestPointBehindPin: 8, shankRise: 0 },
+    },
+  },
+];
+
+export function libraryExample(slug: string): LibraryExample | undefined {
+  return LIBRARY.find((example) => example.slug === slug);
+}

@@ -1,0 +1,109 @@
+import { describe, expect, it } from "vitest";
+import { rigInputSchema } from "@/lib/towing/input";
+import { LIBRARY, libraryExample } from "@/lib/training/library";
+import { markAttempt, prepareLesson } from "@/lib/training/prepare";
+
+function keyFigure(slug: string, stepId = libraryExample(slug)!.keyStep) {
+  const example = libraryExample(slug)!;
+  const lesson = prepareLesson(example, example.rig)!;
+  const step = lesson.steps.find((s) => s.id === stepId);
+  if (!step) throw new Error(`${slug} has no step ${stepId}`);
+  return { value: step.result.value, unit: step.result.unit, lesson };
+}
+
+describe("the built-in library", () => {
+  it("has one example for each of the eight check families, each a valid rig that gives its steps", () => {
+    const families = LIBRARY.map((example) => example.checkId);
+    expect(new Set(families)).toEqual(
+      new Set(["weakest-link", "tongue-share", "payload", "combined-weight", "axle-loads", "weight-distribution", "ball-mount", "accessory-fit"]),
+    );
+    expect(new Set(LIBRARY.map((e) => e.slug)).size).toBe(LIBRARY.length);
+    for (const example of LIBRARY) {
+      expect(rigInputSchema.safeParse(example.rig).success, example.slug).toBe(true);
+      const lesson = prepareLesson(example, example.rig);
+      expect(lesson?.steps.length, example.slug).toBeGreaterThan(0);
+      expect(lesson!.steps.map((s) => s.id), example.slug).toContain(example.keyStep);
+      expect(lesson!.conclusion.generalCautions.length, example.slug).toBeGreaterThan(0);
+    }
+  });
+
+  it("weakest link: the Class 3 receiver governs at 5,000 lb", () => {
+    const { value, unit } = keyFigure("lowest-rating-governs");
+    // Source: New York 15 NYCRR 57.3(c) (adopts SAE J684): Class 3 ≤ 5,000 lb; Washington WAC 204-70-060 (the weakest component governs)
+    expect(value).toBe(5000);
+    expect(unit).toBe("lb");
+    // Physics: arithmetic, 5,000 − 4,600 = 400 lb of room
+    expect(keyFigure("lowest-rating-governs", "gtw-margin").value).toBe(400);
+  });
+
+  it("tongue share: 270 lb on a 3,000 lb trailer is 9 %, under the 10–15 % band", () => {
+    const { value, lesson } = keyFigure("too-light-on-the-tongue");
+    // Physics: arithmetic, 270 ÷ 3,000 = 9 %
+    expect(value).toBeCloseTo(9, 9);
+    // Source: GM and Nissan owner's manuals (conventional trailers: 10–15 % of the loaded trailer's weight)
+    expect(value).toBeLessThan(10);
+    expect(lesson.conclusion.status).toBe("over");
+  });
+
+  it("payload: GVWR 6,000 − curb 4,650 = 1,350 lb, and the family's 1,440 lb is over", () => {
+    // Source: 49 CFR 567.4(g)(3) (payload = GVWR − unloaded vehicle weight)
+    expect(keyFigure("family-full-of-payload").value).toBe(1350);
+    // Source: GM (Cadillac) owner's manuals (tongue weight counts against payload): 750 + 200 + 450 + 40 = 1,440 lb
+    expect(keyFigure("family-full-of-payload", "payload-used").value).toBe(1440);
+  });
+
+  it("combined weight: 6,060 lb loaded truck + 7,500 lb trailer = 13,560 lb, tongue not counted twice", () => {
+    // Physics: combined weight = loaded vehicle (5,400 + 350 + 250 + 60) + whole trailer 7,500; the 900 lb tongue is already in the trailer
+    const { value, lesson } = keyFigure("count-the-tongue-once");
+    expect(value).toBe(13560);
+    expect(value).not.toBe(13560 + 900);
+    // Source: GM (Cadillac) owner's manuals (must not exceed GCWR): 13,560 lb > 13,000 lb
+    expect(lesson.conclusion.status).toBe("over");
+  });
+
+  it("axle loads: WB 145 in, OH 50 in, TW 800 lb → rear +1,075.86 lb, front −275.86 lb", () => {
+    // Physics: statics, moments about the front axle: 800 × (145 + 50) ÷ 145 = 1,075.86 lb
+    expect(keyFigure("tongue-load-on-the-axles").value).toBeCloseTo(1075.86, 2);
+    // Physics: statics, moments about the rear axle: −800 × 50 ÷ 145 = −275.86 lb
+    expect(keyFigure("tongue-load-on-the-axles", "front-change").value).toBeCloseTo(-275.86, 2);
+  });
+
+  it("weight distribution: H1 1030 mm, H2 1058 mm, 50 % → H3 1044 mm; 1046 mm gives back 42.9 %", () => {
+    // Source: Ram owner's manuals (2015, 2018, 2023), citing SAE J2807: H1 1030 mm, H2 1058 mm, 50 % → H3 1044 mm
+    const { value, unit } = keyFigure("give-the-front-axle-back");
+    expect(value).toBeCloseTo(1044, 9);
+    expect(unit).toBe("mm");
+    // Source: Ram owner's manuals, citing SAE J2807: (1058 − 1046) ÷ (1058 − 1030) = 42.86 %
+    expect(keyFigure("give-the-front-axle-back", "restoration").value).toBeCloseTo(42.857, 2);
+  });
+
+  it("ball mount: receiver 26 in, coupler 20 in → 6 in drop; the 4 in mount is 2 in off level", () => {
+    // Source: boating publication how-to; the formula is geometry: 26 − 20 = 6 in drop
+    expect(keyFigure("riding-level").value).toBe(6);
+    // Physics: geometry, |4 − 6| = 2 in
+    expect(keyFigure("riding-level", "level-error").value).toBe(2);
+  });
+
+  it("accessory clearance: 10 in high, 30 in behind → 18.43°, under the 21° departure angle", () => {
+    // Physics: geometry, atan(10 ÷ 30) = 18.43° (departure angle as in 49 CFR 523.2)
+    expect(keyFigure("rack-that-scrapes").value).toBeCloseTo(18.43, 2);
+    // Physics: geometry, 30 × tan 21° − 10 = 1.52 in of extra rise
+    expect(keyFigure("rack-that-scrapes", "shank-rise-needed").value).toBeCloseTo(1.516, 3);
+  });
+});
+
+describe("marking a whole attempt", () => {
+  const example = libraryExample("tongue-load-on-the-axles")!;
+  const steps = prepareLesson(example, example.rig)!.steps;
+
+  it("counts right answers and keeps each answer with its step", () => {
+    const marked = markAttempt(steps, { "front-change": "-276", "rear-change": "1,076", "front-hitched": "2824", "rear-hitched": "3400" });
+    expect(marked).toMatchObject({ ok: true, correct: 3, total: 4 });
+  });
+
+  it("refuses an attempt with an empty or unreadable answer, naming the step", () => {
+    const marked = markAttempt(steps, { "front-change": "", "rear-change": "lots" });
+    expect(marked.ok).toBe(false);
+    expect(!marked.ok && Object.keys(marked.fieldErrors).sort()).toEqual(["answers.front-change", "answers.front-hitched", "answers.rear-change", "answers.rear-hitched"]);
+  });
+});
