@@ -1,4 +1,5 @@
 import type { Metadata, Viewport } from "next";
+import { connection } from "next/server";
 import { sans, mono } from "./fonts";
 import "./globals.css";
 
@@ -16,7 +17,10 @@ export const viewport: Viewport = {
   ],
 };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every page is rendered per request so that its scripts carry that request's CSP nonce (proxy.ts);
+  // a page prerendered at build time would have scripts the policy blocks.
+  await connection();
   return (
     <html lang="en" className={`${sans.variable} ${mono.variable}`}>
       <body className="min-h-dvh antialiased">{children}</body>

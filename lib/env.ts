@@ -24,6 +24,19 @@ const envSchema = z.object({
   /** Sign-in and sign-up attempts allowed per 15 minutes, per account and per client address. */
   AUTH_LIMIT_PER_ACCOUNT: z.coerce.number().int().min(1).default(8),
   AUTH_LIMIT_PER_ADDRESS: z.coerce.number().int().min(1).default(40),
+  /** Label photos and PDFs: the local folder used unless S3_BUCKET is set, and the largest file accepted. */
+  UPLOAD_DIR: z.string().min(1).default("./data/uploads"),
+  UPLOAD_MAX_BYTES: z.coerce.number().int().min(1024).max(100 * 1024 * 1024).default(8 * 1024 * 1024),
+  /** With a bucket, documents go to S3 (or an S3-compatible store at S3_ENDPOINT) instead of UPLOAD_DIR. */
+  S3_BUCKET: z.string().optional(),
+  S3_REGION: z.string().default("us-east-1"),
+  S3_ENDPOINT: z.url().optional(),
+  S3_ACCESS_KEY_ID: z.string().optional(),
+  S3_SECRET_ACCESS_KEY: z.string().optional(),
+  S3_FORCE_PATH_STYLE: flag.default(false),
+  S3_PREFIX: z.string().default("vehicle-documents/"),
+  /** POST /api/v1/evaluate requests allowed per minute per client address. */
+  EVALUATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(120),
 });
 
 export type Env = z.infer<typeof envSchema>;

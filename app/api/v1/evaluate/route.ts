@@ -1,3 +1,4 @@
+import { env } from "@/lib/env";
 import { evaluateRig, parseEvaluateRequest } from "@/lib/towing";
 import { badRequest, json } from "@/lib/server/http";
 import { consume } from "@/lib/server/rate-limit";
@@ -6,14 +7,13 @@ import { clientAddress } from "@/lib/server/request";
 export const dynamic = "force-dynamic";
 
 const MAX_BODY_BYTES = 64 * 1024;
-const PER_MINUTE = 120;
 
 /**
  * The calculation core over HTTP, no account needed: the same input and output as `npm run evaluate`
  * (docs/evaluate.md): a bare rig or `{ rig, options }`. Nothing is stored.
  */
 export async function POST(request: Request) {
-  const limit = consume(`evaluate:${await clientAddress()}`, PER_MINUTE, 60_000);
+  const limit = consume(`evaluate:${await clientAddress()}`, env.EVALUATE_LIMIT_PER_MINUTE, 60_000);
   if (!limit.allowed) {
     return json({ error: "rate_limited", message: "Too many requests. Try again shortly." }, 429, { "retry-after": String(limit.retryAfterSeconds) });
   }
