@@ -6,6 +6,7 @@ import { getDb } from "./client";
 import { evaluateRig } from "../lib/towing";
 import type { RigInput } from "../lib/towing/input";
 import { DEMO_ACCESSORIES, DEMO_CHECKS, DEMO_TRAILERS, DEMO_VEHICLES } from "./demo-rigs";
+import { seedDemoFleet } from "./demo-fleet";
 import { accessoryProfiles, memberships, organisations, savedChecks, trailerProfiles, users, vehicleProfiles } from "./schema";
 
 /**
@@ -54,6 +55,7 @@ export async function seedDemo(): Promise<{ created: boolean }> {
     for (const { name, ...data } of DEMO_ACCESSORIES) {
       await tx.insert(accessoryProfiles).values({ id: newId(), organisationId: shop, name, units: "imperial", data: { units: "imperial", ...data } });
     }
+    await seedDemoFleet(tx);
     // A few checks the counter saved over the last days, computed by the core as the app would.
     let daysAgo = DEMO_CHECKS.length;
     for (const check of DEMO_CHECKS) {

@@ -1,0 +1,396 @@
+import "server-only";
+import { and, asc, desc, eq, isNotNull, isNull, ne, sql, type SQL } from "drizzle-orm";
+import { getDb } from "@/db/client";
+import { accessoryProfiles, savedChecks, trailerProfiles, vehicleProfiles } from "@/db/schema";
+import { exportFleetCsv, parseFleetCsv, type ParsedImport, type UnitsChoice } from "@/lib/fleet/csv";
+import { KIND_WORDS, SECTIONS_BY_KIND, type ProfileKind } from "@/lib/fleet/fields";
+import { can, type Permission } from "@/lib/roles";
+import { convertRig, evaluateRigFast } from "@/lib/towing";
+import type { RigInput } from "@/lib/towing/input";
+import type { Governing, Margin, VerdictLevel } from "@/lib/towing/types";
+import type { UnitSystem } from "@/lib/towing/units";
+import type { ImportOptions, MatrixQuery, ProfileInput } from "@/lib/validation/fleet";
+import type { AccessContext } from "./access";
+import { AccessDenied } from "./team";
+import { newId } from "./tokens";
+
+function assertCan(access: AccessContext, permission: Permission) {
+  if (!can(access.role, permission)) throw new AccessDenied(permission);
+}
+
+const TABLES = { vehicles: vehicleProfiles, trailers: trailerProfiles, accessories: accessoryProfiles } as const;
+type ProfileTable = (typeof TABLES)[ProfileKind];
+
+export interface FleetProfile {
+  id: string;
+  name: string;
+  units: UnitSystem;
+  /** The core's input parts of this kind (no name, no units). */
+  data: Record<string, unknown>;
+  archivedAt: number | null;
+  updatedAt: number;
+}
+
+function toProfile(row: { id: string; name: string; units: UnitSystem; data: unknown; archivedAt: Date | null; updatedAt: Date }): FleetProfile {
+  const { units: _units, ...data } = (row.data ?? {}) as Record<string, unknown>;
+  return { id: row.id, name: row.name, units: row.units, data, archivedAt: row.archivedAt?.getTime() ?? null, updatedAt: row.updatedAt.getTime() };
+}
+
+/** The stored `data`: the profile's sections with its units, the shape `listProfilesForCheck` hands the check screen. */
+function storedData(kind: ProfileKind, input: ProfileInput): Record<string, unknown> {
+  const data: Record<string, unknown> = { units: input.units };
+  for (const section of SECTIONS_BY_KIND[kind]) {
+    const value = (input as Record<string, unknown>)[section];
+    if (value !== undefined) data[section] = value;
+  }
+  return data;
+}
+
+export async function listFleetProfiles(
+  access: AccessContext,
+  kind: ProfileKind,
+  archived: "include" | "only" | "exclude" = "exclude",
+): Promise<FleetProfile[]> {
+  assertCan(access, "fleet.read");
+  const db = await getDb();
+  const table: ProfileTable = TABLES[kind];
+  const where: SQL[] = [eq(table.organisationId, access.organisation.id)];
+  if (archived === "exclude") where.push(isNull(table.archivedAt));
+  if (archived === "only") where.push(isNotNull(table.archivedAt));
+  const rows = await db
+    .select({ id: table.id, name: table.name, units: table.units, data: table.data, archivedAt: table.archivedAt, updatedAt: table.updatedAt })
+    .from(table)
+    .where(and(...where))
+    .orderBy(asc(table.name));
+  return rows.map(toProfile);
+}
+
+export async function getFleetProfile(access: AccessContext, kind: ProfileKind, id: string): Promise<FleetProfile | undefined> {
+  assertCan(access, "fleet.read");
+  const db = await getDb();
+  const table: ProfileTable = TABLES[kind];
+  const row = await db
+    .select({ id: table.id, name: table.name, units: table.units, data: table.data, archivedAt: table.archivedAt, updatedAt: table.updatedAt })
+    .from(table)
+    .where(and(eq(table.id, id), eq(table.organisationId, access.organisation.id)))
+    .get();
+  return row ? toProfile(row) : undefined;
+}
+
+export type SaveProfileResult = { ok: true; id: string } | { ok: false; field?: string; message: string };
+
+async function nameTaken(kind: ProfileKind, organisationId: string, name: string, exceptId?: string): Promise<boolean> {
+  const db = await getDb();
+  const table: ProfileTable = TABLES[kind];
+  const where = [eq(table.organisationId, organisationId), sql`lower(${table.name}) = lower(${name})`];
+  if (exceptId) where.push(ne(table.id, exceptId));
+  return Boolean(await db.select({ id: table.id }).from(table).where(and(...where)).get());
+}
+
+/** Creates a profile, or updates one of this organisation (another's is "not found"). Names are unique per kind. */
+export async function saveFleetProfile(access: AccessContext, kind: ProfileKind, id: string | undefined, input: ProfileInput): Promise<SaveProfileResult> {
+  assertCan(access, "fleet.edit");
+  const db = await getDb();
+  const table: ProfileTable = TABLES[kind];
+  const organisationId = access.organisation.id;
+  if (id) {
+    const existing = await db.select({ id: table.id }).from(table).where(and(eq(table.id, id), eq(table.organisationId, organisationId))).get();
+    if (!existing) return { ok: false, message: `No such ${KIND_WORDS[kind].one} in this organisation.` };
+  }
+  if (await nameTaken(kind, organisationId, input.name, id)) {
+    return { ok: false, field: "name", message: `Another ${KIND_WORDS[kind].one} is already called “${input.name}”.` };
+  }
+  const data = storedData(kind, input);
+  if (id) {
+    await db
+      .update(table)
+      .set({ name: input.name, units: input.units, data, updatedAt: new Date() })
+      .where(and(eq(table.id, id), eq(table.organisationId, organisationId)));
+    return { ok: true, id };
+  }
+  const newProfileId = newId();
+  await db.insert(table).values({ id: newProfileId, organisationId, name: input.name, units: input.units, data });
+  return { ok: true, id: newProfileId };
+}
+
+/** Archives (or restores) a profile: it leaves the pickers and the matrix but stays on record. */
+export async function setProfileArchived(access: AccessContext, kind: ProfileKind, id: string, archived: boolean): Promise<boolean> {
+  assertCan(access, "fleet.edit");
+  const db = await getDb();
+  const table: ProfileTable = TABLES[kind];
+  const result = await db
+    .update(table)
+    .set({ archivedAt: archived ? new Date() : null, updatedAt: new Date() })
+    .where(and(eq(table.id, id), eq(table.organisationId, access.organisation.id)))
+    .returning({ id: table.id });
+  return result.length > 0;
+}
+
+export interface ImportOutcome extends ParsedImport {
+  imported: number;
+  /** What happened: nothing asked (a preview), written, or refused because a row had errors in all-or-nothing. */
+  outcome: "preview" | "imported" | "refused" | "nothing-to-import";
+}
+
+/**
+ * Reads a CSV against the organisation's names, then (unless previewing) writes its valid rows in one
+ * transaction. "all-or-nothing" writes nothing when any row has an error; "valid-rows" skips those rows.
+ */
+export async function importFleetProfiles(access: AccessContext, text: string, options: ImportOptions): Promise<ImportOutcome> {
+  assertCan(access, options.mode === "preview" ? "fleet.read" : "fleet.edit");
+  const db = await getDb();
+  const table: ProfileTable = TABLES[options.kind];
+  const organisationId = access.organisation.id;
+  const names = await db.select({ name: table.name }).from(table).where(eq(table.organisationId, organisationId));
+  const parsed = parseFleetCsv(text, options.kind, options.units as UnitsChoice, { existingNames: names.map((row) => row.name) });
+  if (options.mode === "preview") return { ...parsed, imported: 0, outcome: "preview" };
+  if (parsed.fileErrors.length || (options.mode === "all-or-nothing" && parsed.errorCount > 0)) {
+    return { ...parsed, imported: 0, outcome: "refused" };
+  }
+  const valid = parsed.rows.filter((row) => row.profile);
+  if (valid.length === 0) return { ...parsed, imported: 0, outcome: "nothing-to-import" };
+  const now = new Date();
+  const values = valid.map((row) => ({
+    id: newId(),
+    organisationId,
+    name: row.profile!.name,
+    units: row.profile!.units,
+    data: storedData(options.kind, row.profile!),
+    createdAt: now,
+    updatedAt: now,
+  }));
+  await db.transaction(async (tx) => {
+    // SQLite limits the bound values of one statement; 100 rows of 7 columns stay well inside it.
+    for (let i = 0; i < values.length; i += 100) await tx.insert(table).values(values.slice(i, i + 100));
+  });
+  return { ...parsed, imported: values.length, outcome: "imported" };
+}
+
+export async function exportFleet(access: AccessContext, kind: ProfileKind, archived: "include" | "only" | "exclude" = "exclude"): Promise<string> {
+  const profiles = await listFleetProfiles(access, kind, archived);
+  return exportFleetCsv(kind, profiles);
+}
+
+/** Saved checks whose vehicle is this profile: saved under its name, or with exactly its vehicle figures. */
+export async function savedChecksOfVehicle(access: AccessContext, profile: FleetProfile, limit = 50) {
+  assertCan(access, "fleet.read");
+  const db = await getDb();
+  const rows = await db
+    .select({
+      id: savedChecks.id,
+      createdAt: savedChecks.createdAt,
+      customerName: savedChecks.customerName,
+      vehicleLabel: savedChecks.vehicleLabel,
+      hitchedLabel: savedChecks.hitchedLabel,
+      level: savedChecks.level,
+      complete: savedChecks.complete,
+      units: savedChecks.units,
+      vehicle: sql<string | null>`json_extract(${savedChecks.rig}, '$.vehicle')`,
+    })
+    .from(savedChecks)
+    .where(eq(savedChecks.organisationId, access.organisation.id))
+    .orderBy(desc(savedChecks.createdAt))
+    .limit(2000);
+  const wanted = JSON.stringify(profile.data.vehicle ?? null);
+  return rows
+    .filter((row) => row.vehicleLabel === profile.name || (row.units === profile.units && row.vehicle !== null && JSON.stringify(JSON.parse(row.vehicle)) === wanted))
+    .slice(0, limit)
+    .map(({ vehicle: _vehicle, ...row }) => ({ ...row, createdAt: row.createdAt.getTime() }));
+}
+
+// ---------------------------------------------------------------------------------------------- matrix
+
+export interface MatrixCell {
+  level: VerdictLevel;
+  complete: boolean;
+  governing?: Pick<Governing, "label" | "value" | "unit"> & { checkId: string };
+  margin?: Margin;
+}
+
+export interface MatrixColumn {
+  id: string;
+  kind: "trailers" | "accessories";
+  name: string;
+}
+
+export interface MatrixPage {
+  units: UnitSystem;
+  rows: Array<{ id: string; name: string; cells: Array<MatrixCell | null> }>;
+  columns: MatrixColumn[];
+  page: number;
+  pageCount: number;
+  totalRows: number;
+  colPage: number;
+  colPageCount: number;
+  totalColumns: number;
+  /** Pairs by verdict among the filtered vehicles and trailers; null when only the page was evaluated. */
+  counts: Record<VerdictLevel, number> | null;
+  evaluated: number;
+  elapsedMs: number;
+}
+
+interface Prepared {
+  vehicles: Array<{ id: string; name: string; part: Partial<RigInput> }>;
+  hitched: Array<MatrixColumn & { part: Partial<RigInput> }>;
+}
+
+interface MatrixCacheEntry {
+  fingerprint: string;
+  prepared: Prepared;
+  /** Every pair's result, once computed: index row * columns + column. */
+  cells?: MatrixCell[];
+}
+
+const matrixCache = new Map<string, MatrixCacheEntry>();
+
+function partOf(profile: FleetProfile, units: UnitSystem): Partial<RigInput> {
+  const rig = { units: profile.units, vehicle: {}, ...profile.data } as RigInput;
+  const converted = profile.units === units ? rig : convertRig(rig, units);
+  const { units: _u, ...rest } = converted as RigInput;
+  return rest;
+}
+
+function evaluatePair(units: UnitSystem, vehicle: Prepared["vehicles"][number], hitched: Prepared["hitched"][number], tightMarginRatio: number): MatrixCell {
+  const result = evaluateRigFast({ units, ...vehicle.part, ...hitched.part } as RigInput, { tightMarginRatio });
+  const governing = result.governing;
+  const margin = governing ? result.checks.find((check) => check.id === governing.checkId)?.margin : undefined;
+  return {
+    level: result.level,
+    complete: result.complete,
+    governing: governing ? { label: governing.label, value: governing.value, unit: governing.unit, checkId: governing.checkId } : undefined,
+    margin,
+  };
+}
+
+async function prepareMatrix(access: AccessContext): Promise<MatrixCacheEntry> {
+  const units = access.organisation.units;
+  const [vehicles, trailers, accessories] = await Promise.all([
+    listFleetProfiles(access, "vehicles"),
+    listFleetProfiles(access, "trailers"),
+    listFleetProfiles(access, "accessories"),
+  ]);
+  const fingerprint = [units, access.organisation.tightMarginRatio, ...[vehicles, trailers, accessories].flatMap((list) => list.map((p) => `${p.id}:${p.updatedAt}`))].join("|");
+  const key = access.organisation.id;
+  const cached = matrixCache.get(key);
+  if (cached && cached.fingerprint === fingerprint) return cached;
+  const entry: MatrixCacheEntry = {
+    fingerprint,
+    prepared: {
+      vehicles: vehicles.map((p) => ({ id: p.id, name: p.name, part: partOf(p, units) })),
+      hitched: [
+        ...trailers.map((p) => ({ id: p.id, kind: "trailers" as const, name: p.name, part: partOf(p, units) })),
+        ...accessories.map((p) => ({ id: p.id, kind: "accessories" as const, name: p.name, part: partOf(p, units) })),
+      ],
+    },
+  };
+  matrixCache.set(key, entry);
+  // A handful of organisations at most stay in memory.
+  if (matrixCache.size > 8) matrixCache.delete(matrixCache.keys().next().value!);
+  return entry;
+}
+
+/** Above this many pairs, an unfiltered page evaluates only its own cells (the rest on demand). */
+const FULL_EVALUATION_LIMIT = 20_000;
+
+/**
+ * Every vehicle against every trailer and accessory, with the core's fast path. Filters by name and by
+ * verdict; pages over vehicles (rows) and over trailers and accessories (columns). A verdict filter needs
+ * every pair: the full result is kept per organisation until a profile changes.
+ */
+export async function fleetMatrix(access: AccessContext, query: MatrixQuery): Promise<MatrixPage> {
+  assertCan(access, "fleet.read");
+  const started = performance.now();
+  const entry = await prepareMatrix(access);
+  const { vehicles, hitched } = entry.prepared;
+  const units = access.organisation.units;
+  const ratio = access.organisation.tightMarginRatio;
+  const width = hitched.length;
+  const needle = (text: string | undefined) => text?.toLowerCase() ?? "";
+  const vehicleNeedle = needle(query.vehicle);
+  const hitchedNeedle = needle(query.hitched);
+  let rowIndexes = vehicles.map((_, i) => i).filter((i) => !vehicleNeedle || vehicles[i]!.name.toLowerCase().includes(vehicleNeedle));
+  let colIndexes = hitched.map((_, i) => i).filter((i) => !hitchedNeedle || hitched[i]!.name.toLowerCase().includes(hitchedNeedle));
+
+  let evaluated = 0;
+  const full = Boolean(entry.cells) || Boolean(query.level) || vehicles.length * width <= FULL_EVALUATION_LIMIT;
+  if (full && !entry.cells) {
+    const cells = new Array<MatrixCell>(vehicles.length * width);
+    for (let r = 0; r < vehicles.length; r++) {
+      for (let c = 0; c < width; c++) cells[r * width + c] = evaluatePair(units, vehicles[r]!, hitched[c]!, ratio);
+    }
+    evaluated = cells.length;
+    entry.cells = cells;
+  }
+  let counts: MatrixPage["counts"] = null;
+  if (entry.cells) {
+    const cells = entry.cells;
+    counts = { within: 0, tight: 0, over: 0 };
+    for (const r of rowIndexes) for (const c of colIndexes) counts[cells[r * width + c]!.level]++;
+    if (query.level) {
+      const level = query.level;
+      const rowsWith = new Set<number>();
+      const colsWith = new Set<number>();
+      for (const r of rowIndexes) {
+        for (const c of colIndexes) {
+          if (cells[r * width + c]!.level === level) {
+            rowsWith.add(r);
+            colsWith.add(c);
+          }
+        }
+      }
+      rowIndexes = rowIndexes.filter((r) => rowsWith.has(r));
+      colIndexes = colIndexes.filter((c) => colsWith.has(c));
+    }
+  }
+
+  const pageCount = Math.max(1, Math.ceil(rowIndexes.length / query.pageSize));
+  const page = Math.min(query.page, pageCount);
+  const colPageCount = Math.max(1, Math.ceil(colIndexes.length / query.colPageSize));
+  const colPage = Math.min(query.colPage, colPageCount);
+  const pageRows = rowIndexes.slice((page - 1) * query.pageSize, page * query.pageSize);
+  const pageCols = colIndexes.slice((colPage - 1) * query.colPageSize, colPage * query.colPageSize);
+
+  const rows = pageRows.map((r) => ({
+    id: vehicles[r]!.id,
+    name: vehicles[r]!.name,
+    cells: pageCols.map((c) => {
+      let cell = entry.cells?.[r * width + c];
+      if (!cell) {
+        cell = evaluatePair(units, vehicles[r]!, hitched[c]!, ratio);
+        evaluated++;
+      }
+      return query.level && cell.level !== query.level ? null : cell;
+    }),
+  }));
+  return {
+    units,
+    rows,
+    columns: pageCols.map((c) => ({ id: hitched[c]!.id, kind: hitched[c]!.kind, name: hitched[c]!.name })),
+    page,
+    pageCount,
+    totalRows: rowIndexes.length,
+    colPage,
+    colPageCount,
+    totalColumns: colIndexes.length,
+    counts,
+    evaluated,
+    elapsedMs: Math.round(performance.now() - started),
+  };
+}
+
+/** For the check screen's "start from these profiles": the organisation's own profiles only. */
+export async function rigFromProfiles(
+  access: AccessContext,
+  ids: { vehicle?: string; trailer?: string; accessory?: string },
+): Promise<RigInput | undefined> {
+  if (!ids.vehicle) return undefined;
+  const vehicle = await getFleetProfile(access, "vehicles", ids.vehicle);
+  if (!vehicle) return undefined;
+  const hitchedKind = ids.trailer ? "trailers" : ids.accessory ? "accessories" : undefined;
+  const hitchedId = ids.trailer ?? ids.accessory;
+  const hitched = hitchedKind && hitchedId ? await getFleetProfile(access, hitchedKind, hitchedId) : undefined;
+  const units = vehicle.units;
+  const rig = { units, name: vehicle.name, ...partOf(vehicle, units), ...(hitched ? partOf(hitched, units) : {}) } as RigInput;
+  return rig;
+}
+
