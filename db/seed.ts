@@ -81,6 +81,7 @@ export async function seedDemo(): Promise<{ created: boolean }> {
         createdAt: new Date(Date.now() - daysAgo-- * 86_400_000),
       });
     }
+    await (await import("./demo-training")).seedDemoTraining(tx, shop, userIds);
   });
   return { created: true };
 }

@@ -28,6 +28,9 @@ export function familyLabel(id: string): string {
   return LESSON_FAMILIES.find((family) => family.id === id)?.label ?? id;
 }
 
+/** Who sees a lesson, in words. */
+export const VISIBILITY_WORDS = { draft: "Draft", organisation: "Published", public: "Published + link" } as const;
+
 export interface LibraryExample {
   /** Stable, URL-safe: /training/library/<slug>. */
   slug: string;

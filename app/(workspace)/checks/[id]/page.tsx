@@ -42,6 +42,11 @@ export default async function SavedCheckPage({ params }: { params: Promise<{ id:
             <Link href={`/check?from=${check.id}`} className={buttonClasses({ variant: "secondary" })}>
               Duplicate and change
             </Link>
+            {can(access.role, "training.author") ? (
+              <Link href={`/training/lessons/new?from=${check.id}`} className={buttonClasses({ variant: "secondary" })}>
+                Use as a worked example
+              </Link>
+            ) : null}
             <PrintButton className={buttonClasses({ variant: "secondary", className: "[&_svg]:size-4" })} />
           </>
         }
