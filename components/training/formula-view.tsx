@@ -19,7 +19,7 @@ export function FormulaPiece({ part }: { part: FormulaPart }) {
       return (
         <span className="num not-italic">
           {part.text}
-          {part.unit ? <span className="ml-0.5 text-ink-soft">{part.unit}</span> : null}
+          {part.unit ? <span className="text-ink-soft">{`\u00a0${part.unit}`}</span> : null}
         </span>
       );
     case "operator":
