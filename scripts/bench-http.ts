@@ -4,7 +4,9 @@
  * signed in as counter staff. Prints req/s and p50/p99 for each, and last one JSON line:
  *   {"evaluateVsTrivial":…, "saveP99Ms":…, "errors":…, "lost":…}
  * Targets: evaluate ≥ 0.7 × trivial, save p99 < 50 ms at 10 connections, no errors, no lost saves.
- * BENCH_SECONDS (default 10) sets the length of each run; BENCH_CONNECTIONS (default 10) the connections.
+ * BENCH_SECONDS (default 10) sets the length of the first two runs; the save run sends a fixed number of saves,
+ * BENCH_SAVES (default 3000), so that every answer is counted before the stored rows are; BENCH_CONNECTIONS
+ * (default 10) the connections.
  */
 import autocannon, { type Result } from "autocannon";
 import { readFileSync } from "node:fs";
@@ -12,6 +14,7 @@ import { buildIfNeeded, countRows, seededDatabase, sessionCookieFor, startApp } 
 
 const seconds = Number(process.env.BENCH_SECONDS ?? 10);
 const connections = Number(process.env.BENCH_CONNECTIONS ?? 10);
+const saves = Number(process.env.BENCH_SAVES ?? 3000);
 const rig = readFileSync("tests/fixtures/rigs/camper-on-pickup.json", "utf8");
 
 function run(options: autocannon.Options): Promise<Result> {
@@ -42,11 +45,11 @@ async function main() {
     const json = { "content-type": "application/json" };
     const save = JSON.stringify({ rig: JSON.parse(rig), customerName: "Bench Customer", note: "Load run." });
     const targets: Array<{ name: string; options: autocannon.Options }> = [
-      { name: "GET /api/v1/health", options: { url: `${server.baseURL}/api/v1/health` } },
-      { name: "POST /api/v1/evaluate", options: { url: `${server.baseURL}/api/v1/evaluate`, method: "POST", headers: json, body: rig } },
-      { name: "POST /api/v1/checks (save)", options: { url: `${server.baseURL}/api/v1/checks`, method: "POST", headers: { ...json, cookie }, body: save } },
+      { name: "GET /api/v1/health", options: { url: `${server.baseURL}/api/v1/health`, duration: seconds } },
+      { name: "POST /api/v1/evaluate", options: { url: `${server.baseURL}/api/v1/evaluate`, method: "POST", headers: json, body: rig, duration: seconds } },
+      { name: "POST /api/v1/checks (save)", options: { url: `${server.baseURL}/api/v1/checks`, method: "POST", headers: { ...json, cookie }, body: save, amount: saves } },
     ];
-    console.log(`Towmargin HTTP bench: ${connections} connections, ${seconds} s each, ${server.baseURL} (production build in ${process.env.NEXT_DIST_DIR || ".next"})`);
+    console.log(`Towmargin HTTP bench: ${connections} connections, ${seconds} s per read run, ${saves} saves, ${server.baseURL} (production build in ${process.env.NEXT_DIST_DIR || ".next"})`);
     const results: Result[] = [];
     let lost = 0;
     for (const target of targets) {
@@ -54,7 +57,7 @@ async function main() {
       const warmBefore = await countRows(database.url, "saved_checks");
       const warm = await run({ ...target.options, connections: 2, amount: 200 });
       const before = await countRows(database.url, "saved_checks");
-      const result = await run({ ...target.options, connections, duration: seconds });
+      const result = await run({ ...target.options, connections });
       const after = await countRows(database.url, "saved_checks");
       line(target.name, result);
       results.push(result);

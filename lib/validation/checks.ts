@@ -21,6 +21,8 @@ export const CHECK_SORTS = ["createdAt", "customerName", "vehicleLabel", "level"
 const dateOnly = z
   .string()
   .regex(/^\d{4}-\d{2}-\d{2}$/, "Use a date like 2026-12-01.")
+  // The shape alone lets 2026-13-45 through, which is no day at all.
+  .refine((value) => !Number.isNaN(Date.parse(`${value}T00:00:00Z`)), "Use a date like 2026-12-01.")
   .optional()
   .or(z.literal("").transform(() => undefined));
 

@@ -1,0 +1,493 @@
+import { readFileSync } from "node:fs";
+import { beforeAll, describe, expect, it, vi } from "vitest";
+
+vi.hoisted(() => {
+  process.env.DATABASE_URL = `file:${process.env.TMPDIR ?? "/tmp"}/towmargin-bad-input-${process.pid}-${Date.now()}.db`;
+  process.env.SMTP_PORT = "9";
+  process.env.AUTH_LIMIT_PER_ACCOUNT = "100000";
+  process.env.AUTH_LIMIT_PER_ADDRESS = "100000";
+  process.env.EVALUATE_LIMIT_PER_MINUTE = "100000";
+});
+vi.mock("next/headers", async () => (await import("./support/next-mocks")).headersMock);
+vi.mock("next/navigation", async () => (await import("./support/next-mocks")).navigationMock);
+vi.mock("next/cache", async () => (await import("./support/next-mocks")).cacheMock);
+
+import { switchTo } from "@/app/(workspace)/actions";
+import { saveCheckAction, saveVehicleProfileAction } from "@/app/(workspace)/check/actions";
+import { createLinkAction, emailLinkAction, revokeLinkAction } from "@/app/(workspace)/checks/[id]/actions";
+import { saveSettings } from "@/app/(workspace)/settings/actions";
+import { invite, remove, revoke, setRole } from "@/app/(workspace)/team/actions";
+import { askForReset } from "@/app/(public)/forgot-password/actions";
+import { acceptAsNewMember, acceptAsSignedIn } from "@/app/(public)/invite/[token]/actions";
+import { chooseNewPassword } from "@/app/(public)/reset-password/[token]/actions";
+import { signIn } from "@/app/(public)/sign-in/actions";
+import { finishSignup, signUp } from "@/app/(public)/sign-up/actions";
+import { GET as getCheck } from "@/app/api/v1/checks/[id]/route";
+import { GET as listChecks, POST as postCheck } from "@/app/api/v1/checks/route";
+import { POST as evaluate } from "@/app/api/v1/evaluate/route";
+import { getDb } from "@/db/client";
+import { savedChecks } from "@/db/schema";
+import { initialFormState, type FormState } from "@/lib/validation/form-state";
+import { BODY_CORPUS, CORPUS_SIZE, FIELD_CORPUS, MISSING, type FieldEntry, type FieldKind } from "./support/bad-input-corpus";
+import { actAs, buildFixture, INVITATION_A, ORG_A, sessionOrganisation, type Person } from "./support/fixture";
+import { NavigationSignal } from "./support/next-mocks";
+import { snapshotAll, STACK_TRACE } from "./support/tables";
+
+const camper = JSON.parse(readFileSync("tests/fixtures/rigs/camper-on-pickup.json", "utf8"));
+
+/** What came back, in one shape for responses, action states, redirects and exceptions. */
+interface Outcome {
+  refused: boolean;
+  status?: number;
+  fieldErrors: Record<string, string[]>;
+  text: string;
+  threw?: string;
+}
+
+type Transport = "json" | "value" | "form" | "query";
+
+interface FieldSpec {
+  path: string;
+  kind: FieldKind;
+  required?: boolean;
+  /** Corpus labels this field legitimately accepts (an empty expiry means "never"). */
+  accepts?: string[];
+}
+
+interface Target {
+  name: string;
+  actor: Person | "anonymous";
+  transport: Transport;
+  fields: FieldSpec[];
+  base: () => Record<string, unknown>;
+  call: (input: unknown) => Promise<Outcome>;
+  /** false where the only input is a hidden token or id: a failed state with a message, no field to mark. */
+  fieldErrors?: boolean;
+}
+
+async function fromResponse(response: Response): Promise<Outcome> {
+  const text = await response.text();
+  let body: { fieldErrors?: Record<string, string[]> } = {};
+  try {
+    body = JSON.parse(text);
+  } catch {
+    // not JSON: the checks below fail on it
+  }
+  return { refused: response.status >= 400 && response.status < 500, status: response.status, fieldErrors: body.fieldErrors ?? {}, text };
+}
+
+async function fromAction(run: () => Promise<FormState | void>): Promise<Outcome> {
+  try {
+    const state = await run();
+    if (!state) return { refused: true, fieldErrors: {}, text: "" };
+    return { refused: state.ok === false, fieldErrors: state.fieldErrors ?? {}, text: JSON.stringify(state) };
+  } catch (error) {
+    if (error instanceof NavigationSignal) return { refused: error.kind !== "redirect" || !!error.url?.startsWith("/sign-in"), fieldErrors: {}, text: error.message };
+    return { refused: false, fieldErrors: {}, text: "", threw: error instanceof Error ? `${error.name}: ${error.message}` : String(error) };
+  }
+}
+
+const toForm = (values: Record<string, unknown>) => {
+  const data = new FormData();
+  for (const [key, value] of Object.entries(values)) if (value !== undefined) data.set(key, String(value));
+  return data;
+};
+
+const jsonRequest = (url: string, body: string) =>
+  new Request(url, { method: "POST", body, headers: { "content-type": "application/json", "content-length": String(Buffer.byteLength(body)) } });
+
+/** The rig's fields worth breaking, under a prefix ("rig." inside a save, "" for a bare rig). */
+function rigFields(prefix: string): FieldSpec[] {
+  return [
+    { path: `${prefix}units`, kind: "enum", required: true },
+    { path: `${prefix}vehicle`, kind: "object", required: true },
+    { path: `${prefix}vehicle.gvwr`, kind: "measure" },
+    { path: `${prefix}trailer.grossTrailerWeight`, kind: "measure" },
+    { path: `${prefix}hitch.receiverHeight`, kind: "measure" },
+    { path: `${prefix}trailer.type`, kind: "enum", required: true },
+    { path: `${prefix}name`, kind: "optionalText" },
+  ];
+}
+
+let checkId = "";
+let linkId = "";
+let linkToken = "";
+
+const TARGETS: Target[] = [
+  {
+    name: "POST /api/v1/evaluate",
+    actor: "anonymous",
+    transport: "json",
+    fields: rigFields(""),
+    base: () => structuredClone(camper),
+    call: async (body) => fromResponse(await evaluate(jsonRequest("http://t/api/v1/evaluate", body as string))),
+  },
+  {
+    name: "POST /api/v1/checks",
+    actor: "staffA",
+    transport: "json",
+    fields: [...rigFields("rig."), { path: "customerName", kind: "optionalText" }, { path: "note", kind: "optionalText" }],
+    base: () => ({ rig: structuredClone(camper), customerName: "Tamsin Orrery", note: "Fits." }),
+    call: async (body) => fromResponse(await postCheck(jsonRequest("http://t/api/v1/checks", body as string))),
+  },
+  {
+    name: "GET /api/v1/checks",
+    actor: "staffA",
+    transport: "query",
+    fields: [
+      { path: "pageSize", kind: "formNumber" },
+      { path: "sort", kind: "enum" },
+      { path: "dir", kind: "enum" },
+      { path: "level", kind: "enum", accepts: ["empty string"] },
+      { path: "from", kind: "date", accepts: ["empty string"] },
+      { path: "customer", kind: "optionalText" },
+    ],
+    base: () => ({ pageSize: "20", sort: "createdAt", dir: "desc", level: "over", from: "2026-01-01", customer: "orrery" }),
+    call: async (query) => fromResponse(await listChecks(new Request(`http://t/api/v1/checks?${query as string}`))),
+  },
+  {
+    name: "GET /api/v1/checks/[id]",
+    actor: "staffA",
+    transport: "value",
+    fields: [{ path: "id", kind: "entityId", required: true }],
+    base: () => ({ id: checkId }),
+    call: async (input) => fromResponse(await getCheck(new Request("http://t/"), { params: Promise.resolve({ id: String((input as { id?: unknown })?.id) }) })),
+    fieldErrors: false,
+  },
+  {
+    name: "save a check (action)",
+    actor: "staffA",
+    transport: "value",
+    fields: [...rigFields("rig."), { path: "customerName", kind: "optionalText" }, { path: "note", kind: "optionalText" }],
+    base: () => ({ rig: structuredClone(camper), customerName: "Tamsin Orrery" }),
+    call: (input) => fromAction(() => saveCheckAction(input)),
+  },
+  {
+    name: "save a vehicle profile (action)",
+    actor: "staffA",
+    transport: "value",
+    fields: [{ path: "name", kind: "requiredText", required: true }, ...rigFields("rig.")],
+    base: () => ({ name: "Counter demo tow vehicle", rig: structuredClone(camper) }),
+    call: (input) => fromAction(() => saveVehicleProfileAction(input)),
+  },
+  {
+    name: "make a customer link",
+    actor: "staffA",
+    transport: "form",
+    fields: [
+      { path: "checkId", kind: "entityId", required: true },
+      { path: "expiresInDays", kind: "formNumber", accepts: ["empty string"] },
+    ],
+    base: () => ({ checkId, expiresInDays: "30" }),
+    call: (input) => fromAction(() => createLinkAction(initialFormState, input as FormData)),
+  },
+  {
+    name: "withdraw a customer link",
+    actor: "staffA",
+    transport: "form",
+    fields: [{ path: "linkId", kind: "entityId", required: true }],
+    base: () => ({ linkId }),
+    call: (input) => fromAction(() => revokeLinkAction(initialFormState, input as FormData)),
+  },
+  {
+    name: "mail a customer link",
+    actor: "staffA",
+    transport: "form",
+    fields: [
+      { path: "checkId", kind: "entityId", required: true },
+      { path: "token", kind: "token", required: true },
+      { path: "email", kind: "email", required: true },
+    ],
+    base: () => ({ checkId, token: linkToken, email: "customer@example.com" }),
+    call: (input) => fromAction(() => emailLinkAction(initialFormState, input as FormData)),
+  },
+  {
+    name: "invite a member",
+    actor: "ownerA",
+    transport: "form",
+    fields: [
+      { path: "email", kind: "email", required: true },
+      { path: "role", kind: "enum", required: true },
+    ],
+    base: () => ({ email: "applicant@example.com", role: "staff" }),
+    call: (input) => fromAction(() => invite(initialFormState, input as FormData)),
+  },
+  {
+    name: "change a role",
+    actor: "ownerA",
+    transport: "form",
+    fields: [
+      { path: "membershipId", kind: "looseId", required: true },
+      { path: "role", kind: "enum", required: true },
+    ],
+    base: () => ({ membershipId: "m-staffA", role: "trainer" }),
+    call: (input) => fromAction(() => setRole(initialFormState, input as FormData)),
+  },
+  {
+    name: "remove a member",
+    actor: "ownerA",
+    transport: "form",
+    fields: [{ path: "membershipId", kind: "looseId", required: true }],
+    base: () => ({ membershipId: "m-trainerA" }),
+    call: (input) => fromAction(() => remove(initialFormState, input as FormData)),
+  },
+  {
+    name: "withdraw an invitation",
+    actor: "ownerA",
+    transport: "form",
+    fields: [{ path: "invitationId", kind: "looseId", required: true }],
+    base: () => ({ invitationId: INVITATION_A.id }),
+    call: (input) => fromAction(() => revoke(initialFormState, input as FormData)),
+  },
+  {
+    name: "organisation settings",
+    actor: "ownerA",
+    transport: "form",
+    fields: [
+      { path: "name", kind: "requiredText", required: true },
+      { path: "units", kind: "enum", required: true },
+      { path: "tightMarginPercent", kind: "formNumber", required: true },
+    ],
+    base: () => ({ name: "Alder Lane Hitch", units: "imperial", tightMarginPercent: "10" }),
+    call: (input) => fromAction(() => saveSettings(initialFormState, input as FormData)),
+  },
+  {
+    name: "sign in",
+    actor: "anonymous",
+    transport: "form",
+    fields: [
+      { path: "email", kind: "email", required: true },
+      { path: "password", kind: "password", required: true },
+      { path: "next", kind: "optionalText" },
+    ],
+    base: () => ({ email: "staffa@example.com", password: "not the password", next: "/checks" }),
+    call: (input) => fromAction(() => signIn(initialFormState, input as FormData)),
+  },
+  {
+    name: "sign up",
+    actor: "anonymous",
+    transport: "form",
+    fields: [
+      { path: "name", kind: "requiredText", required: true },
+      { path: "email", kind: "email", required: true },
+      { path: "password", kind: "newPassword", required: true },
+      { path: "organisationName", kind: "requiredText", required: true },
+      { path: "organisationKind", kind: "enum", required: true },
+    ],
+    base: () => ({ name: "Wren Aldous", email: "wren@example.com", password: "a long enough passphrase", organisationName: "Wren Tow Supply", organisationKind: "shop" }),
+    call: (input) => fromAction(() => signUp(initialFormState, input as FormData)),
+  },
+  {
+    name: "finish signing up",
+    actor: "anonymous",
+    transport: "form",
+    fields: [{ path: "token", kind: "token", required: true }],
+    base: () => ({ token: "no-such-signup-token-000001" }),
+    call: (input) => fromAction(() => finishSignup(initialFormState, input as FormData)),
+    fieldErrors: false,
+  },
+  {
+    name: "ask for a password reset",
+    actor: "anonymous",
+    transport: "form",
+    fields: [{ path: "email", kind: "email", required: true }],
+    base: () => ({ email: "staffa@example.com" }),
+    call: (input) => fromAction(() => askForReset(initialFormState, input as FormData)),
+  },
+  {
+    name: "choose a new password",
+    actor: "anonymous",
+    transport: "form",
+    fields: [
+      { path: "token", kind: "token", required: true },
+      { path: "password", kind: "newPassword", required: true },
+    ],
+    base: () => ({ token: "no-such-reset-token-000001", password: "a long enough passphrase", confirmPassword: "a long enough passphrase" }),
+    call: (input) => fromAction(() => chooseNewPassword(initialFormState, input as FormData)),
+  },
+  {
+    name: "accept an invitation with a new account",
+    actor: "anonymous",
+    transport: "form",
+    fields: [
+      { path: "token", kind: "token", required: true },
+      { path: "name", kind: "requiredText", required: true },
+      { path: "password", kind: "newPassword", required: true },
+    ],
+    base: () => ({ token: INVITATION_A.token, name: "Newcomer Person", password: "a long enough passphrase" }),
+    call: (input) => fromAction(() => acceptAsNewMember(initialFormState, input as FormData)),
+  },
+  {
+    name: "accept an invitation signed in",
+    actor: "staffA",
+    transport: "form",
+    fields: [{ path: "token", kind: "token", required: true }],
+    base: () => ({ token: INVITATION_A.token }),
+    call: (input) => fromAction(() => acceptAsSignedIn(initialFormState, input as FormData)),
+    fieldErrors: false,
+  },
+  {
+    name: "switch organisation",
+    actor: "staffA",
+    transport: "form",
+    fields: [{ path: "organisationId", kind: "looseId", required: true }],
+    base: () => ({ organisationId: ORG_A }),
+    call: async (input) => {
+      const before = await sessionOrganisation();
+      const outcome = await fromAction(() => switchTo(input as FormData));
+      // The switcher answers with a redirect either way; refused means the session did not move.
+      return { ...outcome, refused: !outcome.threw && (await sessionOrganisation()) === before };
+    },
+    fieldErrors: false,
+  },
+];
+
+const RAW = "\u0000raw\u0000";
+
+function setPath(target: Record<string, unknown>, path: string, value: unknown) {
+  const keys = path.split(".");
+  let node = target;
+  for (const key of keys.slice(0, -1)) {
+    if (typeof node[key] !== "object" || node[key] === null) node[key] = {};
+    node = node[key] as Record<string, unknown>;
+  }
+  const last = keys[keys.length - 1]!;
+  if (value === MISSING) delete node[last];
+  else node[last] = value;
+}
+
+/** The input of one case in the target's transport, or null when the entry cannot be carried by it. */
+function prepare(target: Target, field: FieldSpec, entry: FieldEntry): unknown {
+  const input = target.base();
+  const textual = target.transport === "form" || target.transport === "query";
+  if (textual) {
+    if (entry.js === MISSING) setPath(input, field.path, MISSING);
+    else if (entry.formText !== undefined) setPath(input, field.path, entry.formText);
+    else if (typeof entry.js === "string" || typeof entry.js === "number") setPath(input, field.path, String(entry.js));
+    else return null;
+    if (target.transport === "query") {
+      const params = new URLSearchParams();
+      for (const [key, value] of Object.entries(input)) if (value !== undefined) params.set(key, String(value));
+      return params.toString();
+    }
+    return toForm(input);
+  }
+  if (target.transport === "value") {
+    setPath(input, field.path, entry.js);
+    return input;
+  }
+  if (entry.jsonText !== undefined) {
+    setPath(input, field.path, RAW);
+    return JSON.stringify(input).replace(JSON.stringify(RAW), entry.jsonText);
+  }
+  setPath(input, field.path, entry.js);
+  return JSON.stringify(input);
+}
+
+function applies(target: Target, field: FieldSpec, entry: FieldEntry): boolean {
+  if (field.accepts?.includes(entry.label)) return false;
+  if (entry.js === MISSING) return !!field.required;
+  if (entry.badFor.includes(field.kind)) return true;
+  const textKinds: FieldKind[] = ["email", "enum", "entityId", "looseId", "token", "requiredText", "optionalText", "newPassword", "password", "date"];
+  return !!entry.nonString && (target.transport === "json" || target.transport === "value") && textKinds.includes(field.kind);
+}
+
+/** A field error at the field, below it, or at the part that holds it (a rig's `units` decides its shape). */
+function hasErrorFor(fieldErrors: Record<string, string[]>, path: string): boolean {
+  return Object.keys(fieldErrors).some((key) => key === path || key.startsWith(`${path}.`) || path.startsWith(`${key}.`) || (key === "rig" && !path.includes(".")));
+}
+
+function parsesAsJson(text: string): boolean {
+  try {
+    JSON.parse(text);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+function problemsOf(target: Target, label: string, outcome: Outcome, expectField: string | null, oversized: boolean): string[] {
+  const problems: string[] = [];
+  if (outcome.threw) problems.push(`threw ${outcome.threw}`);
+  else if (!outcome.refused) problems.push(`accepted (${outcome.status ?? "state"} ${outcome.text.slice(0, 160)})`);
+  if (STACK_TRACE.test(outcome.text)) problems.push(`internal detail in the answer: ${outcome.text.slice(0, 160)}`);
+  const tooLarge = oversized && outcome.status === 413;
+  if (!outcome.threw && outcome.refused && target.fieldErrors !== false && !tooLarge) {
+    if (expectField && !hasErrorFor(outcome.fieldErrors, expectField)) problems.push(`no field error for ${expectField}: ${JSON.stringify(outcome.fieldErrors).slice(0, 200)}`);
+    if (!expectField && Object.keys(outcome.fieldErrors).length === 0) problems.push(`no field errors: ${outcome.text.slice(0, 160)}`);
+  }
+  return problems.map((problem) => `${target.name} · ${label}: ${problem}`);
+}
+
+beforeAll(async () => {
+  await buildFixture();
+  await actAs("staffA");
+  const saved = await saveCheckAction({ rig: camper, customerName: "Tamsin Orrery" });
+  checkId = saved.checkId!;
+  const link = await createLinkAction(initialFormState, toForm({ checkId }));
+  linkToken = link.token!;
+  const db = await getDb();
+  linkId = (await db.query.shareLinks.findFirst())!.id;
+});
+
+describe("the bad-input corpus", () => {
+  it(`holds at least 40 inputs (${CORPUS_SIZE})`, () => {
+    expect(CORPUS_SIZE).toBeGreaterThanOrEqual(40);
+  });
+
+  for (const target of TARGETS) {
+    it(`${target.name}: every bad field and body is refused with field errors, writes nothing and shows no internals`, async () => {
+      await actAs(target.actor);
+      const before = await snapshotAll();
+      const problems: string[] = [];
+      let cases = 0;
+      for (const field of target.fields) {
+        for (const entry of FIELD_CORPUS) {
+          if (!applies(target, field, entry)) continue;
+          const input = prepare(target, field, entry);
+          if (input === null) continue;
+          cases++;
+          const oversized = typeof input === "string" && input.length > 64 * 1024;
+          // NaN and friends are not JSON at all: the whole body is refused, so any field error will do.
+          const expectField = target.transport === "json" && !parsesAsJson(input as string) ? null : field.path;
+          problems.push(...problemsOf(target, `${field.path} = ${entry.label}`, await target.call(input), expectField, oversized));
+        }
+      }
+      for (const body of BODY_CORPUS) {
+        let input: unknown;
+        if (target.transport === "json") input = body.jsonText;
+        else if (target.transport === "value") input = body.js;
+        else if (target.transport === "form") input = toForm(body.form ?? {});
+        else input = new URLSearchParams({ sort: body.jsonText.slice(0, 4000) }).toString();
+        if (target.name === "GET /api/v1/checks/[id]" && typeof body.js !== "object") input = { id: body.js };
+        cases++;
+        const oversized = typeof input === "string" && input.length > 64 * 1024;
+        problems.push(...problemsOf(target, `body: ${body.label}`, await target.call(input), null, oversized));
+      }
+      expect(cases).toBeGreaterThan(0);
+      expect(problems, problems.join("\n")).toEqual([]);
+      expect(await snapshotAll()).toBe(before);
+    });
+  }
+
+  it("SQL in a search is a search for that text, and the tables stay", async () => {
+    await actAs("staffA");
+    for (const fragment of ["' OR '1'='1' --", "%' OR 1=1 --", "x'; DROP TABLE saved_checks; --", "_%_%"]) {
+      const response = await listChecks(new Request(`http://t/api/v1/checks?customer=${encodeURIComponent(fragment)}&vehicle=${encodeURIComponent(fragment)}`));
+      expect(response.status).toBe(200);
+      expect(((await response.json()) as { total: number }).total).toBe(0);
+    }
+    expect((await (await getDb()).select().from(savedChecks)).length).toBeGreaterThan(0);
+  });
+
+  it("unknown keys in a valid save are dropped, never stored", async () => {
+    await actAs("staffA");
+    const body = JSON.stringify({ rig: { ...camper, secretKey: "s", vehicle: { ...camper.vehicle, turbo: true } }, customerName: "Tamsin Orrery", organisationId: "org-b" });
+    const response = await postCheck(jsonRequest("http://t/api/v1/checks", body));
+    expect(response.status).toBe(201);
+    const { id } = (await response.json()) as { id: string };
+    const row = (await (await getDb()).select().from(savedChecks)).find((r) => r.id === id)!;
+    expect(row.organisationId).toBe(ORG_A);
+    expect(JSON.stringify(row.rig)).not.toMatch(/secretKey|turbo/);
+  });
+});
