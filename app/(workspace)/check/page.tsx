@@ -4,6 +4,7 @@ import { PageHeader } from "@/components/ui";
 import { can } from "@/lib/roles";
 import { requirePage } from "@/lib/server/access";
 import { getCheck } from "@/lib/server/checks";
+import { rigFromProfiles } from "@/lib/server/fleet";
 import { listProfilesForCheck } from "@/lib/server/profiles";
 import { entityId } from "@/lib/validation/checks";
 import { saveCheckAction, saveVehicleProfileAction } from "./actions";
@@ -16,6 +17,10 @@ export default async function CheckPage({ searchParams }: { searchParams: Promis
   const from = entityId.safeParse(params.from);
   // "Duplicate" opens a saved check's inputs here; the copy is a new check once saved.
   const source = from.success ? await getCheck(access, from.data) : undefined;
+  // A pairing from the fleet opens here with its two profiles filled in (the organisation's own only).
+  const pick = (value: unknown) => (entityId.safeParse(value).success ? (value as string) : undefined);
+  const paired = source ? undefined : await rigFromProfiles(access, { vehicle: pick(params.vehicle), trailer: pick(params.trailer), accessory: pick(params.accessory) });
+  const initialRig = source?.rig ?? paired;
   const profiles = await listProfilesForCheck(access);
   return (
     <div className="flex flex-col gap-6">
@@ -24,13 +29,15 @@ export default async function CheckPage({ searchParams }: { searchParams: Promis
         description={
           source
             ? `Starting from the check saved ${source.createdAt.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" })}${source.customerName ? ` for ${source.customerName}` : ""}. The saved check stays as it was.`
-            : "Vehicle, hitch and what is hitched: the verdict follows every figure you type."
+            : paired
+              ? `Starting from the fleet's profiles: ${paired.name ?? "vehicle"}. Change any figure to try it; the profiles stay as they are.`
+              : "Vehicle, hitch and what is hitched: the verdict follows every figure you type."
         }
       />
       <CheckWorkbench
-        key={source?.id ?? "new"}
-        initialRig={source?.rig}
-        units={source?.rig.units ?? access.organisation.units}
+        key={source?.id ?? (paired ? JSON.stringify([params.vehicle, params.trailer, params.accessory]) : "new")}
+        initialRig={initialRig}
+        units={initialRig?.units ?? access.organisation.units}
         tightMarginRatio={access.organisation.tightMarginRatio}
         profiles={profiles}
         onSave={can(access.role, "checks.save") ? saveCheckAction : undefined}
