@@ -256,6 +256,7 @@ function buildFromValues(kind: ProfileKind, values: Map<string, unknown>): Recor
   }
   const wd = data.weightDistribution as Record<string, unknown> | undefined;
   if (wd && wd.used === undefined) wd.used = true;
+  if (kind === "vehicles") data.vehicle ??= {};
   return data;
 }
 

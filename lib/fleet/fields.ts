@@ -190,6 +190,8 @@ export function buildProfileData(kind: ProfileKind, values: (path: string) => un
   // A weight-distribution section needs its "used" answer; a rating alone means it is fitted.
   const wd = data.weightDistribution as Record<string, unknown> | undefined;
   if (wd && wd.used === undefined) wd.used = true;
+  // A vehicle with no figures yet is still a vehicle: the checks will list what to measure.
+  if (kind === "vehicles") data.vehicle ??= {};
   return data;
 }
 
