@@ -1,7 +1,8 @@
 "use client";
 /**
  * A small form bound to one training action: hidden fields, an optional control, a button, and the answer in a
- * live region. Still posts without JavaScript. `goTo` follows the made record (a copied or new example).
+ * live region. Still posts without JavaScript. `goTo` follows the made record (a copied or new example); it is a
+ * string, not a function, because Server Components hand it over.
  */
 import { useRouter } from "next/navigation";
 import { useActionState, useEffect, type ReactNode } from "react";
@@ -27,7 +28,8 @@ export function ActionForm({
   label: ReactNode;
   variant?: ButtonVariant;
   children?: ReactNode;
-  goTo?: (id: string) => string;
+  /** Where to go once the action made or removed something; ":id" stands for the new record. */
+  goTo?: string;
   className?: string;
   showUrl?: boolean;
   ariaLabel?: string;
@@ -35,7 +37,7 @@ export function ActionForm({
   const [state, formAction, pending] = useActionState(action, { ok: false } as TrainingFormState);
   const router = useRouter();
   useEffect(() => {
-    if (state.ok && state.id && goTo) router.push(goTo(state.id));
+    if (state.ok && goTo && (state.id || !goTo.includes(":id"))) router.push(goTo.replace(":id", state.id ?? ""));
   }, [state, goTo, router]);
   const fieldError = state.fieldErrors ? Object.values(state.fieldErrors)[0]?.[0] : undefined;
   return (

@@ -91,7 +91,7 @@ export default async function CoursePage({ params }: { params: Promise<{ id: str
                   </Field>
                 </div>
               </ActionForm>
-              <ActionForm action={deleteCourseAction} hidden={{ courseId: course.id }} label="Delete course" variant="danger" goTo={() => "/training"} ariaLabel="Delete this course" />
+              <ActionForm action={deleteCourseAction} hidden={{ courseId: course.id }} label="Delete course" variant="danger" goTo="/training" ariaLabel="Delete this course" />
             </CardBody>
           </Card>
         </div>

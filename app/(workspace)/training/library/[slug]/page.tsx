@@ -23,7 +23,7 @@ export default async function LibraryExamplePage({ params }: { params: Promise<{
       <PageHeader
         eyebrow={<Link href="/training/library" className="underline">Example library</Link>}
         title={<span id="lesson-title">{example.title}</span>}
-        actions={can(access.role, "training.author") ? <ActionForm action={copyLibraryAction} hidden={{ slug: example.slug }} label="Copy into our lessons" variant="primary" goTo={(id) => `/training/lessons/${id}`} /> : null}
+        actions={can(access.role, "training.author") ? <ActionForm action={copyLibraryAction} hidden={{ slug: example.slug }} label="Copy into our lessons" variant="primary" goTo="/training/lessons/:id" /> : null}
       />
       <LessonView lesson={lesson} />
     </div>

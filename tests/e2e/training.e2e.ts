@@ -1,0 +1,84 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { DESKTOP, openBrowser, PHONE, screenshot, signIn } from "./support/browser";
+
+type Session = Awaited<ReturnType<typeof openBrowser>>;
+
+describe("training: author, publish, practise, see the result", () => {
+  let trainer: Session;
+  let learner: Session;
+  let visitor: Session;
+  let lessonPath = "";
+  let publicUrl = "";
+
+  beforeAll(async () => {
+    trainer = await openBrowser(DESKTOP);
+    learner = await openBrowser(DESKTOP);
+    visitor = await openBrowser(PHONE);
+    await signIn(trainer.page, "trainer@quillfield.example.com");
+    await signIn(learner.page, "counter@quillfield.example.com");
+  });
+  afterAll(async () => {
+    await trainer.close();
+    await learner.close();
+    await visitor.close();
+  });
+
+  it("a trainer copies a library example and publishes it to the shop and by link", async () => {
+    const { page } = trainer;
+    await page.goto("/training/library");
+    await screenshot(page, "training-library-desktop");
+    await page.getByRole("button", { name: "Copy “A ball mount that rides level” into our lessons" }).click();
+    await page.waitForURL(/\/training\/lessons\/[A-Za-z0-9_-]+$/);
+    lessonPath = new URL(page.url()).pathname;
+    await expect.poll(() => page.getByTestId("lesson-status").getAttribute("data-status")).toBe("over");
+    await page.getByLabel("Visibility").selectOption("public");
+    await page.getByRole("button", { name: "Set who sees it" }).click();
+    const link = page.getByTestId("public-link");
+    await link.waitFor();
+    publicUrl = (await link.textContent())!.trim();
+    expect(publicUrl).toMatch(/\/learn\/[A-Za-z0-9_-]{32}$/);
+    await screenshot(page, "training-lesson-desktop");
+  });
+
+  it("anyone with the link reads it on a phone, with cautions, not indexed, nothing else of the shop", async () => {
+    const { page } = visitor;
+    await page.goto(publicUrl);
+    await page.getByRole("heading", { name: "A ball mount that rides level" }).waitFor();
+    expect(await page.locator('meta[name="robots"]').getAttribute("content")).toMatch(/noindex/);
+    const text = await page.locator("body").innerText();
+    expect(text).toContain("Drop needed to ride level");
+    expect(text).toContain("Local law and a licensed installer have the last word.");
+    expect(text).not.toContain("Quillfield");
+    await screenshot(page, "training-public-phone");
+  });
+
+  it("counter staff practise it: a wrong unit is explained, answers are marked, the result is recorded", async () => {
+    const { page } = learner;
+    await page.goto(`${lessonPath}/practise`);
+    const first = page.getByTestId("practice-step-drop-needed");
+    await first.getByLabel(/Your answer for/).fill("6 lb");
+    await first.getByRole("button", { name: "Check" }).click();
+    await first.getByText("This step asks for a length (in); lb is a weight.").waitFor();
+    // Source: boating publication how-to; the formula is geometry: 26 − 20 = 6 in drop (here as 152.4 mm)
+    await first.getByLabel(/Your answer for/).fill("152.4 mm");
+    await first.getByRole("button", { name: "Check" }).click();
+    expect(await first.getByTestId("practice-mark").getAttribute("data-mark")).toBe("right");
+    const second = page.getByTestId("practice-step-level-error");
+    await second.getByLabel(/Your answer for/).fill("3");
+    await second.getByRole("button", { name: "Check" }).click();
+    expect(await second.getByTestId("practice-mark").getAttribute("data-mark")).toBe("wrong");
+    await page.getByText("1 of 2 steps right.").waitFor();
+    await page.getByRole("button", { name: "Record my result" }).click();
+    await page.getByText("Recorded: 1 of 2 steps right.").waitFor();
+    await screenshot(page, "training-practice-desktop");
+  });
+
+  it("the trainer sees the learner's result per example", async () => {
+    const { page } = trainer;
+    await page.goto("/training/results");
+    const row = page.getByTestId("result-row").filter({ hasText: "A ball mount that rides level" });
+    await row.waitFor();
+    expect(await row.innerText()).toMatch(/Rowan Teague[\s\S]*1 \/ 2/);
+    await screenshot(page, "training-results-desktop");
+  });
+});
