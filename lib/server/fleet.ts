@@ -239,15 +239,18 @@ interface MatrixCacheEntry {
   prepared: Prepared;
   /** Every pair's result, once computed: index row * columns + column. */
   cells?: MatrixCell[];
+  /** The full evaluation under way, shared by every request that needs it. */
+  computing?: Promise<MatrixCell[]>;
 }
 
 const matrixCache = new Map<string, MatrixCacheEntry>();
 
+/** A profile's own sections in the wanted units (a trailer's part carries no vehicle section to overwrite the truck's). */
 function partOf(profile: FleetProfile, units: UnitSystem): Partial<RigInput> {
   const rig = { units: profile.units, vehicle: {}, ...profile.data } as RigInput;
   const converted = profile.units === units ? rig : convertRig(rig, units);
-  const { units: _u, ...rest } = converted as RigInput;
-  return rest;
+  const { units: _u, vehicle, ...rest } = converted as RigInput;
+  return "vehicle" in profile.data ? { vehicle, ...rest } : rest;
 }
 
 function evaluatePair(units: UnitSystem, vehicle: Prepared["vehicles"][number], hitched: Prepared["hitched"][number], tightMarginRatio: number): MatrixCell {
@@ -289,6 +292,25 @@ async function prepareMatrix(access: AccessContext): Promise<MatrixCacheEntry> {
   return entry;
 }
 
+/** Every pair of the fleet, evaluated once per change of any profile; yields between slices of vehicles. */
+function evaluateAll(entry: MatrixCacheEntry, units: UnitSystem, ratio: number): Promise<MatrixCell[]> {
+  if (entry.cells) return Promise.resolve(entry.cells);
+  entry.computing ??= (async () => {
+    const { vehicles, hitched } = entry.prepared;
+    const width = hitched.length;
+    const cells = new Array<MatrixCell>(vehicles.length * width);
+    const slice = Math.max(1, Math.floor(5_000 / Math.max(1, width)));
+    for (let r = 0; r < vehicles.length; r++) {
+      for (let c = 0; c < width; c++) cells[r * width + c] = evaluatePair(units, vehicles[r]!, hitched[c]!, ratio);
+      if (r % slice === slice - 1) await new Promise((resolve) => setImmediate(resolve));
+    }
+    entry.cells = cells;
+    entry.computing = undefined;
+    return cells;
+  })();
+  return entry.computing;
+}
+
 /** Above this many pairs, an unfiltered page evaluates only its own cells (the rest on demand). */
 const FULL_EVALUATION_LIMIT = 20_000;
 
@@ -314,12 +336,11 @@ export async function fleetMatrix(access: AccessContext, query: MatrixQuery): Pr
   let evaluated = 0;
   const full = Boolean(entry.cells) || Boolean(query.level) || vehicles.length * width <= FULL_EVALUATION_LIMIT;
   if (full && !entry.cells) {
-    const cells = new Array<MatrixCell>(vehicles.length * width);
-    for (let r = 0; r < vehicles.length; r++) {
-      for (let c = 0; c < width; c++) cells[r * width + c] = evaluatePair(units, vehicles[r]!, hitched[c]!, ratio);
-    }
-    evaluated = cells.length;
-    entry.cells = cells;
+    evaluated = (await evaluateAll(entry, units, ratio)).length;
+  } else if (!entry.cells) {
+    // A large fleet's first page answers at once; the rest is worked out in the background, in slices that
+    // leave the server free, so a verdict filter or the counts are ready soon after.
+    void evaluateAll(entry, units, ratio).catch(() => undefined);
   }
   let counts: MatrixPage["counts"] = null;
   if (entry.cells) {

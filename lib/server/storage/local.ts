@@ -9,7 +9,7 @@ import type { DocumentStore } from "./types";
 export function localStore(root: string): DocumentStore {
   const base = resolve(root);
   const pathOf = (key: string) => {
-    if (!/^[A-Za-z0-9/_-]+$/.test(key) || key.includes("..")) throw new Error("Invalid storage key.");
+    if (!/^[A-Za-z0-9/_.-]+$/.test(key) || key.includes("..")) throw new Error("Invalid storage key.");
     const path = resolve(base, key);
     if (!path.startsWith(base + sep)) throw new Error("Invalid storage key.");
     return path;

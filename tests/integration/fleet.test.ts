@@ -1,0 +1,349 @@
+import { rmSync } from "node:fs";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+
+vi.hoisted(() => {
+  const tmp = process.env.TMPDIR ?? "/tmp";
+  process.env.DATABASE_URL = `file:${tmp}/towmargin-fleet-${process.pid}-${Date.now()}.db`;
+  process.env.UPLOAD_DIR = `${tmp}/towmargin-fleet-uploads-${process.pid}-${Date.now()}`;
+  process.env.SMTP_PORT = "9";
+});
+vi.mock("next/headers", async () => (await import("./support/next-mocks")).headersMock);
+vi.mock("next/navigation", async () => (await import("./support/next-mocks")).navigationMock);
+vi.mock("next/cache", async () => (await import("./support/next-mocks")).cacheMock);
+
+import { archiveProfileAction, deleteDocumentAction, saveProfileAction } from "@/app/(workspace)/fleet/actions";
+import { GET as listRoute } from "@/app/api/v1/fleet/[kind]/route";
+import { GET as profileRoute } from "@/app/api/v1/fleet/[kind]/[id]/route";
+import { GET as exportRoute } from "@/app/api/v1/fleet/[kind]/export/route";
+import { GET as templateRoute } from "@/app/api/v1/fleet/[kind]/template/route";
+import { POST as uploadRoute } from "@/app/api/v1/fleet/documents/route";
+import { GET as documentRoute } from "@/app/api/v1/fleet/documents/[id]/route";
+import { POST as importRoute } from "@/app/api/v1/fleet/import/route";
+import { GET as matrixRoute } from "@/app/api/v1/fleet/matrix/route";
+import { getDb } from "@/db/client";
+import { accessoryProfiles, trailerProfiles, vehicleDocuments, vehicleProfiles } from "@/db/schema";
+import { env } from "@/lib/env";
+import { rigFromProfiles } from "@/lib/server/fleet";
+import { getAccess } from "@/lib/server/access";
+import { actAs, buildFixture, ORG_B, type Person } from "./support/fixture";
+
+type Actor = Person | "anonymous";
+
+const PNG = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0x0d, 0x49, 0x48, 0x44, 0x52, 0, 0, 0, 1, 0, 0, 0, 1, 8, 2, 0, 0, 0, 0x90, 0x77, 0x53, 0xde, 0, 0, 0, 0x0c, 0x49, 0x44, 0x41, 0x54, 0x08, 0xd7, 0x63, 0xf8, 0xcf, 0xc0, 0, 0, 0x03, 0x01, 0x01, 0, 0x18, 0xdd, 0x8d, 0xb0, 0, 0, 0, 0, 0x49, 0x45, 0x4e, 0x44, 0xae, 0x42, 0x60, 0x82]);
+
+// Invented figures for an invented truck and trailer; only their validity matters here.
+const TRUCK = { name: "Crew truck 1", units: "imperial", vehicle: { gvwr: "9900", curbWeight: "6400", towRating: "9000" }, hitch: { class: "4", gtwRating: "10000", twRating: "1000", receiverHeight: "20.5", pinToFascia: "5" } };
+const TRAILER = { name: "Mower trailer 1", units: "imperial", trailer: { type: "utility", grossTrailerWeight: "3000", tongueWeight: "360", couplerHeight: "17.5" } };
+
+async function fleetSnapshot() {
+  const db = await getDb();
+  return JSON.stringify({
+    vehicles: await db.select().from(vehicleProfiles).orderBy(vehicleProfiles.id),
+    trailers: await db.select().from(trailerProfiles).orderBy(trailerProfiles.id),
+    accessories: await db.select().from(accessoryProfiles).orderBy(accessoryProfiles.id),
+    documents: await db.select().from(vehicleDocuments).orderBy(vehicleDocuments.id),
+  });
+}
+
+const params = <T extends Record<string, string>>(value: T) => ({ params: Promise.resolve(value) });
+
+function importRequest(csv: string | Uint8Array<ArrayBuffer>, fields: Record<string, string>, fileName = "fleet.csv") {
+  const body = new FormData();
+  for (const [key, value] of Object.entries(fields)) body.set(key, value);
+  body.set("file", new File([csv], fileName, { type: "text/csv" }));
+  return new Request("http://t/api/v1/fleet/import", { method: "POST", body });
+}
+
+function uploadRequest(vehicleId: string, bytes: Uint8Array<ArrayBuffer>, fileName = "label.png", kind = "door-jamb-label") {
+  const body = new FormData();
+  body.set("vehicleId", vehicleId);
+  body.set("kind", kind);
+  body.set("file", new File([bytes], fileName, { type: "image/png" }));
+  return new Request("http://t/api/v1/fleet/documents", { method: "POST", body });
+}
+
+let truckOfA = "";
+let trailerOfA = "";
+let documentOfA = "";
+
+beforeAll(async () => {
+  await buildFixture();
+  await actAs("fleetA");
+  const truck = await saveProfileAction({ kind: "vehicles", values: TRUCK });
+  expect(truck).toMatchObject({ ok: true });
+  truckOfA = truck.id!;
+  const trailer = await saveProfileAction({ kind: "trailers", values: TRAILER });
+  expect(trailer.ok).toBe(true);
+  trailerOfA = trailer.id!;
+  const upload = await uploadRoute(uploadRequest(truckOfA, PNG));
+  expect(upload.status).toBe(201);
+  documentOfA = ((await upload.json()) as { document: { id: string } }).document.id;
+});
+
+afterAll(() => {
+  rmSync(env.UPLOAD_DIR, { recursive: true, force: true });
+});
+
+describe("profiles: create, edit, archive", () => {
+  it("stores a profile as the core's rig parts, in its units", async () => {
+    const db = await getDb();
+    const row = (await db.select().from(vehicleProfiles)).find((r) => r.id === truckOfA)!;
+    expect(row.organisationId).toBe("org-a");
+    expect(row.data).toEqual({
+      units: "imperial",
+      vehicle: { towRating: 9000, gvwr: 9900, curbWeight: 6400 },
+      hitch: { class: 4, gtwRating: 10000, twRating: 1000, receiverHeight: 20.5, pinToFascia: 5 },
+    });
+  });
+
+  it("edits, refuses a name already used, and archives and restores", async () => {
+    await actAs("ownerA");
+    expect((await saveProfileAction({ kind: "vehicles", id: truckOfA, values: { ...TRUCK, vehicle: { ...TRUCK.vehicle, gvwr: "10000" } } })).ok).toBe(true);
+    const clash = await saveProfileAction({ kind: "trailers", values: { ...TRAILER, name: "mower TRAILER 1" } });
+    expect(clash.ok).toBe(false);
+    expect(clash.fieldErrors).toHaveProperty("name");
+    expect((await archiveProfileAction({ kind: "trailers", id: trailerOfA, archived: true })).ok).toBe(true);
+    const list = (await (await listRoute(new Request("http://t/api/v1/fleet/trailers"), params({ kind: "trailers" }))).json()) as { profiles: unknown[] };
+    expect(list.profiles).toHaveLength(0);
+    expect((await archiveProfileAction({ kind: "trailers", id: trailerOfA, archived: false })).ok).toBe(true);
+  });
+
+  it("bad input gets field errors and writes nothing", async () => {
+    await actAs("fleetA");
+    const before = await fleetSnapshot();
+    const state = await saveProfileAction({ kind: "vehicles", values: { ...TRUCK, name: "", vehicle: { gvwr: "heavy" }, hitch: { receiverHeight: "900" } } });
+    expect(state.ok).toBe(false);
+    expect(Object.keys(state.fieldErrors ?? {}).sort()).toEqual(["hitch.receiverHeight", "name", "vehicle.gvwr"]);
+    expect((await saveProfileAction({ kind: "boats", values: TRUCK })).fieldErrors).toHaveProperty("kind");
+    expect((await saveProfileAction("not an object")).ok).toBe(false);
+    expect((await archiveProfileAction({ kind: "vehicles", id: "../../x", archived: true })).ok).toBe(false);
+    expect(await fleetSnapshot()).toEqual(before);
+  });
+
+  it("the check screen's start from two profiles composes one rig, only from the organisation's own", async () => {
+    await actAs("staffA");
+    const access = (await getAccess())!;
+    const rig = await rigFromProfiles(access, { vehicle: truckOfA, trailer: trailerOfA });
+    expect(rig).toMatchObject({ units: "imperial", name: "Crew truck 1", vehicle: { gvwr: 10000 }, trailer: { type: "utility" } });
+    await actAs("ownerB");
+    expect(await rigFromProfiles((await getAccess())!, { vehicle: truckOfA, trailer: trailerOfA })).toBeUndefined();
+  });
+});
+
+describe("actions refuse who may not edit, and write nothing", () => {
+  const refused: Actor[] = ["anonymous", "staffA", "trainerA", "ownerB"];
+  for (const actor of refused) {
+    it(`${actor}: save, edit, archive, remove a document`, async () => {
+      await actAs(actor);
+      const before = await fleetSnapshot();
+      if (actor !== "ownerB") expect((await saveProfileAction({ kind: "vehicles", values: { ...TRUCK, name: "Sneaky truck" } })).ok).toBe(false);
+      expect((await saveProfileAction({ kind: "vehicles", id: truckOfA, values: { ...TRUCK, name: "Renamed" } })).ok).toBe(false);
+      expect((await archiveProfileAction({ kind: "vehicles", id: truckOfA, archived: true })).ok).toBe(false);
+      expect((await deleteDocumentAction({ id: documentOfA })).ok).toBe(false);
+      // B's owner may edit B's own fleet: for A's records the answer is "not in this organisation".
+      expect(await fleetSnapshot()).toEqual(before);
+    });
+  }
+});
+
+describe("routes: signed out 401, wrong role 403, another organisation sees nothing of A", () => {
+  const reads = () => [
+    listRoute(new Request("http://t/api/v1/fleet/vehicles"), params({ kind: "vehicles" })),
+    profileRoute(new Request("http://t/"), params({ kind: "vehicles", id: truckOfA })),
+    exportRoute(new Request("http://t/api/v1/fleet/vehicles/export"), params({ kind: "vehicles" })),
+    templateRoute(new Request("http://t/"), params({ kind: "vehicles" })),
+    matrixRoute(new Request("http://t/api/v1/fleet/matrix")),
+    documentRoute(new Request("http://t/"), params({ id: documentOfA })),
+    importRoute(importRequest("name,units\nX,imperial\n", { kind: "vehicles", units: "column", mode: "preview" })),
+    importRoute(importRequest("name,units\nX,imperial\n", { kind: "vehicles", units: "column", mode: "valid-rows" })),
+    uploadRoute(uploadRequest(truckOfA, PNG)),
+  ];
+
+  it("anonymous: every route answers 401 and writes nothing", async () => {
+    await actAs("anonymous");
+    const before = await fleetSnapshot();
+    for (const response of await Promise.all(reads())) {
+      expect(response.status).toBe(401);
+      expect(((await response.json()) as { error: string }).error).toBe("unauthenticated");
+    }
+    expect(await fleetSnapshot()).toEqual(before);
+  });
+
+  for (const actor of ["staffA", "trainerA"] as const) {
+    it(`${actor}: reads the fleet; importing and uploading answer 403 and write nothing`, async () => {
+      await actAs(actor);
+      const before = await fleetSnapshot();
+      const statuses = await Promise.all(reads().map(async (r) => (await r).status));
+      expect(statuses).toEqual([200, 200, 200, 200, 200, 200, 200, 403, 403]);
+      expect(await fleetSnapshot()).toEqual(before);
+    });
+  }
+
+  it("ownerB: A's profile and document are not found, lists and the matrix hold none of A's, uploads to A's vehicle are refused", async () => {
+    await actAs("ownerB");
+    const before = await fleetSnapshot();
+    const list = (await (await listRoute(new Request("http://t/api/v1/fleet/vehicles?archived=include"), params({ kind: "vehicles" }))).json()) as { profiles: unknown[] };
+    expect(list.profiles).toEqual([]);
+    expect((await profileRoute(new Request("http://t/"), params({ kind: "vehicles", id: truckOfA }))).status).toBe(404);
+    expect((await documentRoute(new Request("http://t/"), params({ id: documentOfA }))).status).toBe(404);
+    const exported = await (await exportRoute(new Request("http://t/api/v1/fleet/vehicles/export?archived=include"), params({ kind: "vehicles" }))).text();
+    expect(exported).not.toContain("Crew truck 1");
+    const matrix = (await (await matrixRoute(new Request("http://t/api/v1/fleet/matrix"))).json()) as { rows: unknown[]; columns: unknown[] };
+    expect(matrix.rows).toEqual([]);
+    expect(matrix.columns).toEqual([]);
+    const upload = await uploadRoute(uploadRequest(truckOfA, PNG));
+    expect(upload.status).toBe(404);
+    // Importing names A already uses is B's own business: the duplicate check looks at B only.
+    const preview = (await (await importRoute(importRequest("name,units\nCrew truck 1,imperial\n", { kind: "vehicles", units: "column", mode: "preview" }))).json()) as { validCount: number };
+    expect(preview.validCount).toBe(1);
+    expect(await fleetSnapshot()).toEqual(before);
+  });
+
+  it("bad parameters answer 400 or 404 with field errors, never a stack trace", async () => {
+    await actAs("fleetA");
+    const bad = await matrixRoute(new Request("http://t/api/v1/fleet/matrix?level=purple&pageSize=100000"));
+    expect(bad.status).toBe(400);
+    expect(Object.keys(((await bad.json()) as { fieldErrors: object }).fieldErrors).sort()).toEqual(["level", "pageSize"]);
+    expect((await listRoute(new Request("http://t/"), params({ kind: "boats" }))).status).toBe(404);
+    expect((await profileRoute(new Request("http://t/"), params({ kind: "vehicles", id: "../../etc" }))).status).toBe(404);
+    const badImport = await importRoute(importRequest("name\nA\n", { kind: "vehicles", units: "furlongs", mode: "now" }));
+    expect(badImport.status).toBe(400);
+    expect(Object.keys(((await badImport.json()) as { fieldErrors: object }).fieldErrors).sort()).toEqual(["mode", "units"]);
+    const notForm = await importRoute(new Request("http://t/api/v1/fleet/import", { method: "POST", body: "hello", headers: { "content-type": "text/plain" } }));
+    expect(notForm.status).toBe(400);
+  });
+});
+
+describe("documents", () => {
+  it("serves the file to a member with the stored type, a download name and nosniff", async () => {
+    await actAs("trainerA");
+    const response = await documentRoute(new Request("http://t/"), params({ id: documentOfA }));
+    expect(response.status).toBe(200);
+    expect(response.headers.get("content-type")).toBe("image/png");
+    expect(response.headers.get("x-content-type-options")).toBe("nosniff");
+    expect(response.headers.get("content-disposition")).toMatch(/^attachment; filename="label.png"/);
+    expect(new Uint8Array(await response.arrayBuffer())).toEqual(PNG);
+  });
+
+  it("judges the type by the content: text named .png, and a file over the limit, are refused", async () => {
+    await actAs("fleetA");
+    const before = await fleetSnapshot();
+    const fake = await uploadRoute(uploadRequest(truckOfA, new TextEncoder().encode("<html><script>alert(1)</script></html>"), "label.png"));
+    expect(fake.status).toBe(400);
+    expect(((await fake.json()) as { fieldErrors: Record<string, string[]> }).fieldErrors.file![0]).toMatch(/photo .* or a PDF/);
+    const big = new Uint8Array(env.UPLOAD_MAX_BYTES + 1);
+    big.set(PNG);
+    expect((await uploadRoute(uploadRequest(truckOfA, big))).status).toBe(413);
+    expect((await uploadRoute(uploadRequest(truckOfA, PNG, "label.png", "selfie"))).status).toBe(400);
+    expect(await fleetSnapshot()).toEqual(before);
+  });
+
+  it("a PDF is accepted by its bytes whatever its name", async () => {
+    await actAs("fleetA");
+    const pdf = new TextEncoder().encode("%PDF-1.4\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n");
+    const response = await uploadRoute(uploadRequest(truckOfA, pdf, "hitch label.txt", "hitch-label"));
+    expect(response.status).toBe(201);
+    const { document } = (await response.json()) as { document: { id: string; contentType: string } };
+    expect(document.contentType).toBe("application/pdf");
+    expect((await deleteDocumentAction({ id: document.id })).ok).toBe(true);
+  });
+});
+
+describe("import", () => {
+  const header = "name,units,gvwr,curb_weight,gawr_front,gawr_rear,gcwr,tow_max,tongue_max,hitch_class,receiver_opening,hitch_gtw,hitch_tw,receiver_height,pin_to_fascia";
+  const rows = (n: number, prefix: string) => Array.from({ length: n }, (_, i) => `${prefix} ${i + 1},imperial,9900,6400,4800,6000,18000,9000,900,4,2,10000,1000,${(19 + (i % 4) * 0.5).toFixed(1)},5`);
+
+  it("all or nothing: one bad row and nothing at all is written", async () => {
+    await actAs("fleetA");
+    const before = await fleetSnapshot();
+    const csv = [header, ...rows(20, "Batch truck"), "Broken truck,imperial,9900 kg,6400,,,,,,,,,,,"].join("\n");
+    const response = await importRoute(importRequest(csv, { kind: "vehicles", units: "column", mode: "all-or-nothing" }));
+    const body = (await response.json()) as { outcome: string; imported: number; errorCount: number; validCount: number };
+    expect(body).toMatchObject({ outcome: "refused", imported: 0, errorCount: 1, validCount: 20 });
+    expect(await fleetSnapshot()).toEqual(before);
+  });
+
+  it("a file that is not CSV, or too large, is refused before anything is read", async () => {
+    await actAs("fleetA");
+    const before = await fleetSnapshot();
+    const pdf = await importRoute(importRequest(new TextEncoder().encode("%PDF-1.7 binary"), { kind: "vehicles", units: "imperial", mode: "valid-rows" }, "fleet.csv"));
+    expect(pdf.status).toBe(400);
+    const big = await importRoute(importRequest(new Uint8Array(10 * 1024 * 1024).fill(0x41), { kind: "vehicles", units: "imperial", mode: "valid-rows" }));
+    expect(big.status).toBe(413);
+    expect(await fleetSnapshot()).toEqual(before);
+  });
+
+  it("1,000 valid rows import in one go, in a few seconds", async () => {
+    await actAs("fleetA");
+    const csv = [header, ...rows(1000, "Import truck")].join("\n");
+    const started = performance.now();
+    const response = await importRoute(importRequest(csv, { kind: "vehicles", units: "column", mode: "valid-rows" }));
+    const elapsed = performance.now() - started;
+    const body = (await response.json()) as { outcome: string; imported: number };
+    console.log(`import of 1,000 vehicle rows: ${elapsed.toFixed(0)} ms`);
+    expect(body).toMatchObject({ outcome: "imported", imported: 1000 });
+    expect(elapsed).toBeLessThan(5000);
+    const db = await getDb();
+    expect((await db.select().from(vehicleProfiles)).filter((r) => r.name.startsWith("Import truck"))).toHaveLength(1000);
+    // The same file again: every row is now a duplicate of the fleet's names.
+    const again = (await (await importRoute(importRequest(csv, { kind: "vehicles", units: "column", mode: "valid-rows" }))).json()) as { outcome: string; errorCount: number };
+    expect(again).toMatchObject({ outcome: "nothing-to-import", errorCount: 1000 });
+  });
+});
+
+describe("the pairing matrix at 500 × 200", () => {
+  it("answers a page, a verdict filter and a cached page within 2 s", async () => {
+    // B gets 500 vehicles and 200 trailers and accessories, written directly (invented figures).
+    const db = await getDb();
+    const vehicles = Array.from({ length: 500 }, (_, i) => ({
+      id: `mv-${i}`,
+      organisationId: ORG_B,
+      name: `Matrix truck ${String(i).padStart(3, "0")}`,
+      units: "imperial" as const,
+      data: {
+        units: "imperial",
+        vehicle: { towRating: 5000 + (i % 10) * 500, tongueWeightLimit: 500 + (i % 10) * 50, gvwr: 7000, curbWeight: 5000, gcwr: 13000 + (i % 5) * 500, gawrFront: 3700, gawrRear: 4000, axleWeights: { front: 3000, rear: 2500 }, wheelbase: 140, rearAxleToHitch: 50 },
+        hitch: { class: 3, gtwRating: 6000 + (i % 4) * 1000, twRating: 600 + (i % 4) * 100, receiverHeight: 19 + (i % 5) * 0.5, pinToFascia: 5 },
+      },
+    }));
+    const hitched = Array.from({ length: 160 }, (_, i) => ({
+      id: `mt-${i}`,
+      organisationId: ORG_B,
+      name: `Matrix trailer ${String(i).padStart(3, "0")}`,
+      units: "imperial" as const,
+      data: { units: "imperial", trailer: { type: "utility", grossTrailerWeight: 2000 + i * 40, tongueWeight: 240 + i * 5, tongueWeightBasis: "measured", couplerHeight: 17 }, ballMount: { drop: 2 } },
+    }));
+    const racks = Array.from({ length: 40 }, (_, i) => ({
+      id: `ma-${i}`,
+      organisationId: ORG_B,
+      name: `Matrix rack ${String(i).padStart(2, "0")}`,
+      units: "imperial" as const,
+      data: { units: "imperial", accessory: { type: "cargo-carrier", weight: 50, loadWeight: 100 + i * 10, loadCenterFromPin: 20 } },
+    }));
+    for (let i = 0; i < vehicles.length; i += 100) await db.insert(vehicleProfiles).values(vehicles.slice(i, i + 100));
+    for (let i = 0; i < hitched.length; i += 100) await db.insert(trailerProfiles).values(hitched.slice(i, i + 100));
+    await db.insert(accessoryProfiles).values(racks);
+
+    await actAs("ownerB");
+    const time = async (url: string) => {
+      const started = performance.now();
+      const response = await matrixRoute(new Request(url));
+      const elapsed = performance.now() - started;
+      return { elapsed, body: (await response.json()) as { totalRows: number; totalColumns: number; rows: Array<{ cells: unknown[] }>; counts: { within: number; tight: number; over: number } | null; evaluated: number } };
+    };
+    const page = await time("http://t/api/v1/fleet/matrix?pageSize=25&colPageSize=10");
+    const filtered = await time("http://t/api/v1/fleet/matrix?level=over&pageSize=25&colPageSize=10");
+    const cached = await time("http://t/api/v1/fleet/matrix?level=within&vehicle=truck%2001&page=1");
+    console.log(
+      `matrix 500 × 200: first page ${page.elapsed.toFixed(0)} ms (${page.body.evaluated} pairs), verdict filter over all 100,000 pairs ${filtered.elapsed.toFixed(0)} ms, later filtered page ${cached.elapsed.toFixed(0)} ms`,
+    );
+    expect(page.body.totalRows).toBe(500);
+    expect(page.body.totalColumns).toBe(200);
+    expect(page.body.rows).toHaveLength(25);
+    expect(page.body.rows[0]!.cells).toHaveLength(10);
+    expect(filtered.body.evaluated).toBe(100_000);
+    const counts = filtered.body.counts!;
+    expect(counts.within + counts.tight + counts.over).toBe(100_000);
+    for (const run of [page, filtered, cached]) expect(run.elapsed).toBeLessThan(2000);
+  });
+});
