@@ -5,7 +5,6 @@ import type { AccessContext } from "@/lib/server/access";
 import { getLucia } from "@/lib/server/session";
 import { ORG_A, ORG_B, PEOPLE } from "./fixture";
 import { cookieJar, NavigationSignal } from "./next-mocks";
-import { snapshotAll } from "./tables";
 
 /**
  * The access matrix's machinery: who asks (anonymous, or each role in organisation A or B), what came back
@@ -119,12 +118,12 @@ export function expectationFor(rule: Rule, scope: Scope, actor: Actor): Expectat
   return "allowed";
 }
 
-/** Every row that belongs to organisation A, for cells where someone of B may write to B. */
-export async function snapshotOfA(): Promise<string> {
-  const all = JSON.parse(await snapshotAll()) as Record<string, Array<Record<string, unknown>>>;
-  const ofA: Record<string, unknown[]> = {};
-  for (const [table, rows] of Object.entries(all)) {
-    ofA[table] = rows.filter((row) => row.organisation_id === ORG_A || (table === "organisations" && row.id === ORG_A));
+/** The rows of a snapshot (tables.ts) that belong to organisation A, for cells where B may write to B. */
+export function ofA(snapshot: string): string {
+  const all = JSON.parse(snapshot) as Record<string, Array<Record<string, unknown>>>;
+  const rows: Record<string, unknown[]> = {};
+  for (const [table, list] of Object.entries(all)) {
+    rows[table] = list.filter((row) => row.organisation_id === ORG_A || (table === "organisations" && row.id === ORG_A));
   }
-  return JSON.stringify(ofA);
+  return JSON.stringify(rows);
 }
