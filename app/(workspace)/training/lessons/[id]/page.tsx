@@ -26,7 +26,7 @@ export default async function LessonPage({ params }: { params: Promise<{ id: str
       <CardBody className="space-y-4">
         <ActionForm action={setVisibilityAction} hidden={{ lessonId: lesson.id }} label="Apply" variant="primary" showUrl ariaLabel="Set who sees it">
           <Field label="Visibility" className="w-full">
-            <Select name="visibility" defaultValue={lesson.visibility}>
+            <Select key={lesson.visibility} name="visibility" defaultValue={lesson.visibility}>
               <option value="draft">Draft: trainers and owners only</option>
               <option value="organisation">Everyone in the organisation</option>
               <option value="public">Everyone in the organisation, and anyone with a link (new link)</option>
