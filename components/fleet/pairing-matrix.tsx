@@ -5,7 +5,7 @@ import useSWR from "swr";
 import { Button, Card, CardBody, Field, Select, TextInput, VerdictBadge, cn } from "@/components/ui";
 import { fetchJson } from "@/lib/client/fetcher";
 import { fleetMatrixKey } from "@/lib/fleet/keys";
-import { formatNumber, formatRatio } from "@/lib/format";
+import { formatNumber } from "@/lib/format";
 import type { MatrixCell, MatrixColumn, MatrixPage } from "@/lib/server/fleet";
 
 export interface PairingMatrixProps {
@@ -39,7 +39,12 @@ function CellLink({ vehicle, column, cell }: { vehicle: { id: string; name: stri
           <span className="num whitespace-nowrap">
             {formatNumber(governing.value, governing.unit)} {governing.unit}
           </span>
-          {cell.margin ? <span className="num block whitespace-nowrap">{cell.margin.value >= 0 ? "room " : "over by "}{formatRatio(Math.abs(cell.margin.ratio))}</span> : null}
+          {cell.margin ? (
+            <span className="num block whitespace-nowrap">
+              {cell.margin.value >= 0 ? "room " : "over by "}
+              {formatNumber(Math.abs(cell.margin.value), cell.margin.unit)} {cell.margin.unit}
+            </span>
+          ) : null}
         </span>
       ) : null}
     </Link>
@@ -126,7 +131,7 @@ export function PairingMatrix({ initial, initialKey, initialFilters, cautions }:
                     </Link>
                   </th>
                   {row.cells.map((cell, i) => (
-                    <td key={data.columns[i]!.id} className={cn("px-1 py-1", !cell && "bg-sunken/40")}>
+                    <td key={data.columns[i]!.id} className={cn("relative px-1 py-1", !cell && "bg-sunken/40")}>
                       {cell ? <CellLink vehicle={row} column={data.columns[i]!} cell={cell} /> : <span className="sr-only">not shown by the filter</span>}
                     </td>
                   ))}

@@ -184,6 +184,8 @@ export function ProfilesTable({ kind, initial, canEdit, archiveAction }: Profile
                     <TH
                       key={header.id}
                       numeric={numeric}
+                      // A visually hidden heading is positioned absolutely: anchored here, it stays inside the scroll box.
+                      className="relative"
                       sort={sortable ? (direction === "asc" ? "ascending" : direction === "desc" ? "descending" : "none") : undefined}
                       onSort={sortable ? () => header.column.toggleSorting(direction === "asc") : undefined}
                     >
@@ -205,7 +207,7 @@ export function ProfilesTable({ kind, initial, canEdit, archiveAction }: Profile
                 {row.getVisibleCells().map((cell) => {
                   const numeric = (cell.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric;
                   return (
-                    <TD key={cell.id} numeric={numeric} className={cell.column.id === "name" ? "min-w-44" : undefined}>
+                    <TD key={cell.id} numeric={numeric} className={cell.column.id === "name" ? "relative min-w-44" : "relative"}>
                       {flexRender(cell.column.columnDef.cell, cell.getContext())}
                       {cell.column.id === "name" && row.original.archivedAt ? <span className="ml-2 text-xs text-ink-soft">archived</span> : null}
                     </TD>
