@@ -101,6 +101,24 @@ describe("fleet: import, pairings, a pairing opened", () => {
     await screenshot(page, "fleet-pairing-check-desktop");
   });
 
+  it("adds a trailer through the form: a bad figure is named beside its field, then it saves", async () => {
+    const { page } = manager;
+    await page.goto("/fleet/trailers/new");
+    await page.getByLabel("Name").fill("Sod trailer P · 6×12");
+    await page.getByLabel("Trailer type").selectOption("utility");
+    // Invented figures; 40,000 lb is beyond the core's 30,000 lb gross trailer weight range.
+    await page.getByLabel("Gross trailer weight", { exact: true }).fill("40000");
+    await page.getByRole("button", { name: "Add trailer" }).click();
+    await page.getByText("Gross trailer weight must be at most 30000 lb.").waitFor();
+    await screenshot(page, "fleet-trailer-form-error-desktop");
+    await page.getByLabel("Gross trailer weight", { exact: true }).fill("3200");
+    await page.getByLabel("Tongue weight", { exact: true }).fill("380");
+    await page.getByRole("button", { name: "Add trailer" }).click();
+    await page.waitForURL(/\/fleet\/trailers\/[A-Za-z0-9_-]+$/);
+    await page.getByRole("heading", { name: "Sod trailer P · 6×12" }).waitFor();
+    expect(await count("SELECT count(*) AS n FROM trailer_profiles WHERE name = ? AND organisation_id = 'org-fernhollow'", ["Sod trailer P · 6×12"])).toBe(1);
+  });
+
   it("keeps a vehicle's label photo, and the phone views do not scroll sideways", async () => {
     const { page } = manager;
     await page.goto("/fleet/vehicles");
