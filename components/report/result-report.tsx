@@ -14,6 +14,7 @@ import { plainTitle } from "./glossary";
 import { PrintButton } from "./print-button";
 import { reportFigures } from "./report-charts";
 import { describeRig, listWords } from "./rig-summary";
+import "./result-report.css";
 
 export interface ResultReportProps {
   shopName: string;
@@ -119,9 +120,7 @@ export function ResultReport({ shopName, createdAt, customerName, rig, result, q
         "print:max-w-none print:p-0 print:text-[8pt] print:leading-snug",
       )}
     >
-      {/* One sheet: narrow margins; the rest of the print rules ride on print: variants. */}
-      <style>{"@page { margin: 8mm 9mm; }"}</style>
-
+      {/* One sheet: narrow margins come from result-report.css; the rest of the print rules ride on print: variants. */}
       <header className="flex items-start justify-between gap-4 border-b border-rule pb-4 print:pb-1">
         <div className="min-w-0 print:flex print:flex-1 print:items-end print:justify-between print:gap-6">
           <div className="min-w-0">
