@@ -95,7 +95,7 @@ export const TRAILER_FIELDS: ProfileField[] = [
   num("trailer.safetyChainRating", "chain_rating", "Coupler"),
   num("ballMount.gtwRating", "mount_gtw", "Ball mount"),
   num("ballMount.twRating", "mount_tw", "Ball mount"),
-  num("ballMount.drop", "mount_drop", "Ball mount", "Negative for a rise."),
+  num("ballMount.drop", "mount_drop", "Ball mount"),
   num("ballMount.length", "mount_length", "Ball mount"),
   { path: "weightDistribution.used", column: "wd_fitted", label: "Weight distribution used", type: "yes-no", group: "Weight distribution" },
   num("weightDistribution.tongueRating", "wd_tongue_rating", "Weight distribution"),
