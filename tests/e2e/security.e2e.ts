@@ -96,13 +96,18 @@ describe("pages hydrate and work under the policy", () => {
     await page.close();
   });
 
-  it("workspace pages: overview, check (live verdict and charts), saved checks, team, settings, mailbox", async () => {
+  it("workspace pages: overview, check (live verdict and charts), saved checks, team, settings, mailbox, fleet, training", async () => {
     for (const [session, path] of [
       [staff, "/overview"],
       [staff, "/checks"],
       [owner, "/team"],
       [owner, "/settings"],
       [owner, "/mailbox"],
+      [owner, "/fleet"],
+      [owner, "/fleet/vehicles"],
+      [owner, "/fleet/matrix"],
+      [owner, "/training"],
+      [owner, "/training/library"],
     ] as const) {
       const { page, response, csp } = await visit(session, path);
       expect(response?.status(), path).toBe(200);
