@@ -1,4 +1,3 @@
-import { revalidatePath } from "next/cache";
 import { authorize } from "@/lib/server/access";
 import { listChecks, saveCheck } from "@/lib/server/checks";
 import { badRequest, json, refusal } from "@/lib/server/http";
@@ -38,6 +37,7 @@ export async function POST(request: Request) {
   const parsed = saveCheckSchema.safeParse(body);
   if (!parsed.success) return badRequest(fieldErrorsFrom(parsed.error.issues));
   const { id, result } = await saveCheck(allowed.access, parsed.data);
-  revalidatePath("/checks");
+  // No revalidatePath here: every page is rendered per request (nothing of /checks is cached on the server),
+  // and a program calling this route has no router cache to refresh.
   return json({ ok: true, id, level: result.verdict.level, complete: result.verdict.complete }, 201, { location: `/api/v1/checks/${id}` });
 }
