@@ -28,6 +28,8 @@ export interface FieldSpec {
   required?: boolean;
   /** Corpus labels this field legitimately accepts (an empty expiry means "never"). */
   accepts?: string[];
+  /** Where the field's error is reported when not at its path (a form nested in an envelope); null: anywhere. */
+  errorKey?: string | null;
 }
 
 export interface Target {
@@ -43,6 +45,8 @@ export interface Target {
   wholeBody?: (body: unknown) => unknown;
   /** The query key a bad whole body goes into (query targets). */
   queryKey?: string;
+  /** A query whose every key accepts any short text: whole bad bodies say nothing there. */
+  skipBodies?: true;
 }
 
 export async function fromResponse(response: Response): Promise<Outcome> {
@@ -167,11 +171,11 @@ export async function runCorpus(target: Target): Promise<void> {
       cases++;
       const oversized = typeof input === "string" && input.length > 64 * 1024;
       // NaN and friends are not JSON at all: the whole body is refused, so any field error will do.
-      const expectField = target.transport === "json" && !parsesAsJson(input as string) ? null : field.path;
+      const expectField = target.transport === "json" && !parsesAsJson(input as string) ? null : field.errorKey === undefined ? field.path : field.errorKey;
       problems.push(...problemsOf(target, `${field.path} = ${entry.label}`, await target.call(input), expectField, oversized));
     }
   }
-  for (const body of BODY_CORPUS) {
+  for (const body of target.skipBodies ? [] : BODY_CORPUS) {
     let input: unknown;
     if (target.transport === "json") input = body.jsonText;
     else if (target.transport === "value") input = target.wholeBody ? target.wholeBody(body.js) : body.js;
