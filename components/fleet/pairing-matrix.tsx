@@ -29,10 +29,13 @@ function CellLink({ vehicle, column, cell }: { vehicle: { id: string; name: stri
       href={cellHref(vehicle.id, column)}
       data-testid="pairing-cell"
       data-level={cell.level}
-      aria-label={`${vehicle.name} with ${column.name}: ${cell.level}${governing ? `, limited by ${governing.label}` : ""}. Open the check.`}
       className="flex min-w-36 flex-col gap-1 rounded-md p-1.5 hover:bg-sunken focus-visible:outline-2 focus-visible:outline-accent"
     >
       <VerdictBadge status={cell.level} size="sm" label={cell.complete ? undefined : `${cell.level === "over" ? "Over" : "Tight"} · data missing`} />
+      {/* Read after the visible words, so the link's name holds what is on it (label in name). */}
+      <span className="sr-only">
+        {vehicle.name} with {column.name}. Open the check.
+      </span>
       {governing ? (
         <span className="text-xs leading-snug text-ink-soft">
           {governing.label}{" "}
@@ -110,7 +113,7 @@ export function PairingMatrix({ initial, initialKey, initialFilters, cautions }:
                     <Link href={`/fleet/${column.kind}/${column.id}`} className="underline decoration-rule">
                       {column.name}
                     </Link>
-                    <span className="block font-normal text-ink-faint">{column.kind === "trailers" ? "trailer" : "accessory"}</span>
+                    <span className="block font-normal text-ink-soft">{column.kind === "trailers" ? "trailer" : "accessory"}</span>
                   </th>
                 ))}
               </tr>

@@ -47,7 +47,7 @@ export function ActionForm({
       ))}
       <div className="flex flex-wrap items-end gap-2">
         {children}
-        <Button type="submit" variant={variant} size="sm" loading={pending} aria-label={ariaLabel}>
+        <Button type="submit" variant={variant} size="sm" loading={pending} aria-label={buttonName(label, ariaLabel)}>
           {label}
         </Button>
       </div>
@@ -68,4 +68,14 @@ export function ActionForm({
       ) : null}
     </form>
   );
+}
+
+/**
+ * A button's spoken name must contain the words on it (WCAG 2.5.3, label in name), so speech users can say
+ * what they see: the extra context follows the visible label.
+ */
+function buttonName(label: string, context: string | undefined): string | undefined {
+  if (!context) return undefined;
+  if (context.toLowerCase().startsWith(label.toLowerCase())) return context;
+  return `${label}: ${context.charAt(0).toLowerCase()}${context.slice(1)}`;
 }

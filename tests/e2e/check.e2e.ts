@@ -85,7 +85,7 @@ describe("the counter check, saved, shared and withdrawn", () => {
     await page.waitForURL(/\/checks\/[A-Za-z0-9_-]+$/);
     checkUrl = page.url();
     expect(await countSavedChecks()).toBe(before + 1);
-    await page.getByText("for Hollis Ambersmith").first().waitFor();
+    await page.getByText("for Hollis Ambersmith").filter({ visible: true }).first().waitFor();
     await page.goto("/checks");
     await page.getByRole("cell", { name: "Hollis Ambersmith" }).waitFor();
     await page.getByLabel("Customer").fill("ambersmith");

@@ -27,7 +27,7 @@ describe("training: author, publish, practise, see the result", () => {
     const { page } = trainer;
     await page.goto("/training/library");
     await screenshot(page, "training-library-desktop");
-    await page.getByRole("button", { name: "Copy “A ball mount that rides level” into our lessons" }).click();
+    await page.getByRole("button", { name: "Copy into our lessons: “A ball mount that rides level”" }).click();
     await page.waitForURL(/\/training\/lessons\/[A-Za-z0-9_-]+$/);
     lessonPath = new URL(page.url()).pathname;
     await expect.poll(() => page.getByTestId("lesson-status").getAttribute("data-status")).toBe("over");

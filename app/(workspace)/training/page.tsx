@@ -56,7 +56,7 @@ export default async function TrainingPage() {
             ))}
           </ul>
           {author ? (
-            <ActionForm action={createCourseAction} hidden={{}} label="Make course" goTo="/training/courses/:id" ariaLabel="Make a course">
+            <ActionForm action={createCourseAction} hidden={{}} label="Make course" goTo="/training/courses/:id" ariaLabel="Make course">
               <Field label="New course title" className="w-full max-w-sm">
                 <TextInput name="title" required maxLength={120} />
               </Field>

@@ -31,7 +31,7 @@ export default async function LibraryPage() {
                   </Link>
                 </h2>
                 <p className="flex-1 text-sm leading-snug text-ink-soft">{example.question}</p>
-                {author ? <ActionForm action={copyLibraryAction} hidden={{ slug: example.slug }} label="Copy into our lessons" goTo="/training/lessons/:id" ariaLabel={`Copy “${example.title}” into our lessons`} /> : null}
+                {author ? <ActionForm action={copyLibraryAction} hidden={{ slug: example.slug }} label="Copy into our lessons" goTo="/training/lessons/:id" ariaLabel={`Copy into our lessons: “${example.title}”`} /> : null}
               </CardBody>
             </Card>
           </li>

@@ -42,8 +42,8 @@ export default async function CoursePage({ params }: { params: Promise<{ id: str
                 </div>
                 {author ? (
                   <div className="flex flex-wrap gap-2">
-                    {index > 0 ? <ActionForm action={moveCourseLessonAction} hidden={{ courseId: course.id, lessonId: lesson.id, direction: "up" }} label="Up" ariaLabel={`Move “${lesson.title}” up`} /> : null}
-                    {index < course.lessons.length - 1 ? <ActionForm action={moveCourseLessonAction} hidden={{ courseId: course.id, lessonId: lesson.id, direction: "down" }} label="Down" ariaLabel={`Move “${lesson.title}” down`} /> : null}
+                    {index > 0 ? <ActionForm action={moveCourseLessonAction} hidden={{ courseId: course.id, lessonId: lesson.id, direction: "up" }} label="Up" ariaLabel={`Up: move “${lesson.title}” up`} /> : null}
+                    {index < course.lessons.length - 1 ? <ActionForm action={moveCourseLessonAction} hidden={{ courseId: course.id, lessonId: lesson.id, direction: "down" }} label="Down" ariaLabel={`Down: move “${lesson.title}” down`} /> : null}
                     <ActionForm action={removeCourseLessonAction} hidden={{ courseId: course.id, lessonId: lesson.id }} label="Remove" variant="quiet" ariaLabel={`Remove “${lesson.title}” from the course`} />
                   </div>
                 ) : (
@@ -91,7 +91,7 @@ export default async function CoursePage({ params }: { params: Promise<{ id: str
                   </Field>
                 </div>
               </ActionForm>
-              <ActionForm action={deleteCourseAction} hidden={{ courseId: course.id }} label="Delete course" variant="danger" goTo="/training" ariaLabel="Delete this course" />
+              <ActionForm action={deleteCourseAction} hidden={{ courseId: course.id }} label="Delete course" variant="danger" goTo="/training" ariaLabel="Delete course" />
             </CardBody>
           </Card>
         </div>

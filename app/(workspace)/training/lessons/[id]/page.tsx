@@ -33,7 +33,7 @@ export default async function LessonPage({ params }: { params: Promise<{ id: str
             </Select>
           </Field>
         </ActionForm>
-        <ActionForm action={deleteLessonAction} hidden={{ lessonId: lesson.id }} label="Delete example" variant="danger" goTo="/training" ariaLabel="Delete this example" />
+        <ActionForm action={deleteLessonAction} hidden={{ lessonId: lesson.id }} label="Delete example" variant="danger" goTo="/training" ariaLabel="Delete example" />
       </CardBody>
     </Card>
   ) : null;
