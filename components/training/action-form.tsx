@@ -1,4 +1,5 @@
 "use client";
+import type React from "react";
 /**
  * A small form bound to one training action: hidden fields, an optional control, a button, and the answer in a
  * live region. Still posts without JavaScript. `goTo` follows the made record (a copied or new example); it is a
@@ -74,8 +75,8 @@ export function ActionForm({
  * A button's spoken name must contain the words on it (WCAG 2.5.3, label in name), so speech users can say
  * what they see: the extra context follows the visible label.
  */
-function buttonName(label: string, context: string | undefined): string | undefined {
+function buttonName(label: React.ReactNode, context: string | undefined): string | undefined {
   if (!context) return undefined;
-  if (context.toLowerCase().startsWith(label.toLowerCase())) return context;
+  if (typeof label !== "string" || context.toLowerCase().startsWith(label.toLowerCase())) return context;
   return `${label}: ${context.charAt(0).toLowerCase()}${context.slice(1)}`;
 }
