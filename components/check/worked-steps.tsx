@@ -2,9 +2,10 @@
  * The worked steps of a check, as a trainer would write them on a board: what is computed, in words and as a
  * formula, from which figures, with what result. Numbers are formatted through lib/format only.
  */
+import type { ReactNode } from "react";
 import { TBody, TD, TH, THead, TR } from "@/components/ui";
 import { formatNumber, formatQuantity } from "@/lib/format";
-import type { Step, UnitString } from "@/lib/towing";
+import type { Step, StepInput, UnitString } from "@/lib/towing";
 
 /** A step figure: with its unit when it has one; a bare factor or share keeps three decimals. */
 export function formatStepValue(value: number, unit: UnitString): string {
@@ -28,29 +29,8 @@ export function WorkedSteps({ steps }: { steps: Step[] }) {
             </code>
           </p>
           {step.inputs.length ? (
-            <div className="mt-2 overflow-x-auto rounded-md border border-rule">
-              <table className="w-full border-collapse text-left text-[0.8125rem]">
-                <THead>
-                  <TR>
-                    <TH className="px-2 py-1.5">Symbol</TH>
-                    <TH className="px-2 py-1.5">Figure</TH>
-                    <TH numeric className="px-2 py-1.5">
-                      Value
-                    </TH>
-                  </TR>
-                </THead>
-                <TBody>
-                  {step.inputs.map((input) => (
-                    <TR key={input.symbol + input.label}>
-                      <TD className="px-2 py-1.5 font-mono">{input.symbol}</TD>
-                      <TD className="px-2 py-1.5 text-ink-soft">{input.label}</TD>
-                      <TD numeric className="px-2 py-1.5">
-                        {formatStepValue(input.value, input.unit)}
-                      </TD>
-                    </TR>
-                  ))}
-                </TBody>
-              </table>
+            <div className="mt-2">
+              <StepFiguresTable inputs={step.inputs} renderSymbol={(symbol) => <span className="font-mono">{symbol}</span>} />
             </div>
           ) : null}
           <p className="mt-1.5 text-sm text-ink">
@@ -61,5 +41,36 @@ export function WorkedSteps({ steps }: { steps: Step[] }) {
         </li>
       ))}
     </ol>
+  );
+}
+
+/** The figures that go into a step: symbol, what it is, and its value with the unit. Shared with lessons. */
+export function StepFiguresTable({ inputs, renderSymbol, caption }: { inputs: StepInput[]; renderSymbol: (symbol: string) => ReactNode; caption?: string }) {
+  return (
+    <div className="overflow-x-auto rounded-md border border-rule">
+      <table className="w-full border-collapse text-left text-[0.8125rem]">
+        {caption ? <caption className="sr-only">{caption}</caption> : null}
+        <THead>
+          <TR>
+            <TH className="px-2 py-1.5">Symbol</TH>
+            <TH className="px-2 py-1.5">Figure</TH>
+            <TH numeric className="px-2 py-1.5">
+              Value
+            </TH>
+          </TR>
+        </THead>
+        <TBody>
+          {inputs.map((input) => (
+            <TR key={input.symbol + input.label}>
+              <TD className="px-2 py-1.5">{renderSymbol(input.symbol)}</TD>
+              <TD className="px-2 py-1.5 text-ink-soft">{input.label}</TD>
+              <TD numeric className="px-2 py-1.5">
+                {formatStepValue(input.value, input.unit)}
+              </TD>
+            </TR>
+          ))}
+        </TBody>
+      </table>
+    </div>
   );
 }

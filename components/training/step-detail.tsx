@@ -2,41 +2,18 @@
  * One worked step as a lesson shows it: the method in words, the formula, the figures that go in, the formula
  * with the numbers put in, and the result. Figures format through lib/format (via formatStepValue).
  */
-import { formatStepValue } from "@/components/check/worked-steps";
-import { TBody, TD, TH, THead, TR } from "@/components/ui";
+import { StepFiguresTable, formatStepValue } from "@/components/check/worked-steps";
 import type { PreparedStep } from "@/lib/training/prepare";
 import { FormulaView } from "./formula-view";
 
 export function StepInputs({ step }: { step: PreparedStep }) {
   if (!step.inputs.length) return null;
   return (
-    <div className="overflow-x-auto rounded-md border border-rule">
-      <table className="w-full border-collapse text-left text-[0.8125rem]">
-        <caption className="sr-only">Figures for {step.title.toLowerCase()}</caption>
-        <THead>
-          <TR>
-            <TH className="px-2 py-1.5">Symbol</TH>
-            <TH className="px-2 py-1.5">Figure</TH>
-            <TH numeric className="px-2 py-1.5">
-              Value
-            </TH>
-          </TR>
-        </THead>
-        <TBody>
-          {step.inputs.map((input) => (
-            <TR key={input.symbol + input.label}>
-              <TD className="px-2 py-1.5">
-                <FormulaView parts={[{ kind: "symbol", ...splitSymbol(step, input.symbol) }]} />
-              </TD>
-              <TD className="px-2 py-1.5 text-ink-soft">{input.label}</TD>
-              <TD numeric className="px-2 py-1.5">
-                {formatStepValue(input.value, input.unit)}
-              </TD>
-            </TR>
-          ))}
-        </TBody>
-      </table>
-    </div>
+    <StepFiguresTable
+      inputs={step.inputs}
+      caption={`Figures for ${step.title.toLowerCase()}`}
+      renderSymbol={(symbol) => <FormulaView parts={[{ kind: "symbol", ...splitSymbol(step, symbol) }]} />}
+    />
   );
 }
 
