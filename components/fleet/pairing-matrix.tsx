@@ -2,11 +2,12 @@
 import Link from "next/link";
 import { useState } from "react";
 import useSWR from "swr";
-import { Button, Card, CardBody, Field, Select, TextInput, VerdictBadge, cn } from "@/components/ui";
+import { Button, Card, CardBody, Field, TextInput, VerdictBadge, cn } from "@/components/ui";
 import { fetchJson } from "@/lib/client/fetcher";
 import { fleetMatrixKey } from "@/lib/fleet/keys";
 import { formatNumber } from "@/lib/format";
 import type { MatrixCell, MatrixColumn, MatrixPage } from "@/lib/server/fleet";
+import { VerdictFilter } from "@/components/verdict-filter";
 
 export interface PairingMatrixProps {
   initial: MatrixPage;
@@ -81,14 +82,7 @@ export function PairingMatrix({ initial, initialKey, initialFilters, cautions }:
           <Field label="Trailer or accessory">
             <TextInput value={filters.hitched} onChange={(e) => setFilter("hitched", e.target.value)} placeholder="Any" />
           </Field>
-          <Field label="Verdict">
-            <Select value={filters.level} onChange={(e) => setFilter("level", e.target.value)}>
-              <option value="">Any</option>
-              <option value="within">Within</option>
-              <option value="tight">Tight</option>
-              <option value="over">Over</option>
-            </Select>
-          </Field>
+          <VerdictFilter value={filters.level} onChange={(value) => setFilter("level", value)} />
         </form>
       </Card>
       {error ? <p role="alert" className="text-sm text-over">{(error as Error).message}</p> : null}

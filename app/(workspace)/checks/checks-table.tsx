@@ -2,10 +2,11 @@
 import Link from "next/link";
 import { useState } from "react";
 import useSWR from "swr";
-import { Button, Card, EmptyRow, Field, Select, TBody, TD, TH, THead, TR, Table, TextInput, VerdictBadge } from "@/components/ui";
+import { Button, Card, EmptyRow, Field, TBody, TD, TH, THead, TR, Table, TextInput, VerdictBadge } from "@/components/ui";
 import { fetchJson } from "@/lib/client/fetcher";
 import { checksKey } from "@/lib/client/keys";
 import type { CheckListPage } from "@/lib/server/checks";
+import { VerdictFilter } from "@/components/verdict-filter";
 
 type Sort = "createdAt" | "customerName" | "vehicleLabel" | "level";
 
@@ -47,14 +48,7 @@ export function ChecksTable({ initial, initialKey }: { initial: CheckListPage; i
           <Field label="To">
             <TextInput type="date" value={filters.to} onChange={(e) => setFilter("to", e.target.value)} />
           </Field>
-          <Field label="Verdict">
-            <Select value={filters.level} onChange={(e) => setFilter("level", e.target.value)}>
-              <option value="">Any</option>
-              <option value="within">Within</option>
-              <option value="tight">Tight</option>
-              <option value="over">Over</option>
-            </Select>
-          </Field>
+          <VerdictFilter value={filters.level} onChange={(value) => setFilter("level", value)} />
         </form>
       </Card>
       {error ? <p role="alert" className="text-sm text-over">{(error as Error).message}</p> : null}
