@@ -4,6 +4,7 @@ import { mkdirSync } from "node:fs";
 import { dirname, resolve } from "node:path";
 import { env } from "../lib/env";
 import * as schema from "./schema";
+import { serialClient } from "./serial-client";
 
 export type Database = LibSQLDatabase<typeof schema>;
 
@@ -14,8 +15,11 @@ interface DatabaseHandle {
 }
 
 /**
- * One client per process. A local file gets WAL (readers never wait for the writer), foreign keys and a
- * busy timeout; a libSQL server URL (libsql://, https://, ws://) is used as it is, with its auth token.
+ * One client per process. A local file is one connection taken in turn (db/serial-client.ts explains why),
+ * with WAL (other processes' readers never wait for the writer), `synchronous = NORMAL` (a commit survives a
+ * crash of the process; a power cut may lose the last ones, never the file), foreign keys and a busy
+ * timeout for locks held by other processes. A libSQL server URL (libsql://, https://, ws://) is used as it
+ * is, with its auth token.
  */
 function open(url: string, authToken: string | undefined): DatabaseHandle {
   const isLocalFile = url.startsWith("file:");
@@ -23,7 +27,7 @@ function open(url: string, authToken: string | undefined): DatabaseHandle {
     const path = url.slice("file:".length);
     if (path && path !== ":memory:") mkdirSync(dirname(resolve(path)), { recursive: true });
   }
-  const client = createClient({ url, authToken });
+  const client = isLocalFile ? serialClient(createClient({ url, concurrency: 1, timeout: 5000 })) : createClient({ url, authToken });
   const ready = (async () => {
     if (isLocalFile) {
       await client.execute("PRAGMA journal_mode = WAL");

@@ -1,0 +1,80 @@
+import { createClient, type Client } from "@libsql/client";
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { afterEach, beforeEach, describe, expect, it } from "vitest";
+import { serialClient } from "@/db/serial-client";
+
+let dir: string;
+let client: Client;
+
+beforeEach(async () => {
+  dir = mkdtempSync(join(tmpdir(), "towmargin-serial-"));
+  client = serialClient(createClient({ url: `file:${join(dir, "app.db")}`, concurrency: 1, timeout: 5000 }));
+  await client.execute("PRAGMA journal_mode = WAL");
+  await client.execute("PRAGMA synchronous = NORMAL");
+  await client.execute("CREATE TABLE rows (id INTEGER PRIMARY KEY, kind TEXT NOT NULL)");
+});
+
+afterEach(() => {
+  client.close();
+  rmSync(dir, { recursive: true, force: true });
+});
+
+const count = async (kind?: string) =>
+  Number((await client.execute(kind ? { sql: "SELECT count(*) AS n FROM rows WHERE kind = ?", args: [kind] } : "SELECT count(*) AS n FROM rows")).rows[0]!.n);
+
+describe("the local database client", () => {
+  it("answers every statement of a burst on the one connection that got the settings", async () => {
+    // 1 is NORMAL. Without the gate the pool opens more connections under a burst, and those report 2 (FULL).
+    const answers = await Promise.all(Array.from({ length: 40 }, () => client.execute("PRAGMA synchronous")));
+    expect(new Set(answers.map((answer) => Number(answer.rows[0]![0])))).toEqual(new Set([1]));
+  });
+
+  it("lets statements that arrive during a transaction wait for it instead of failing or freezing", async () => {
+    const transactions = Array.from({ length: 10 }, async (_, i) => {
+      const tx = await client.transaction("write");
+      await tx.execute({ sql: "INSERT INTO rows (kind) VALUES (?)", args: [`tx-${i}`] });
+      await new Promise((resolve) => setTimeout(resolve, 2));
+      await tx.execute({ sql: "INSERT INTO rows (kind) VALUES (?)", args: [`tx-${i}`] });
+      await tx.commit();
+    });
+    const plain = Array.from({ length: 50 }, (_, i) => client.execute({ sql: "INSERT INTO rows (kind) VALUES (?)", args: [`plain-${i % 5}`] }));
+    await Promise.all([...transactions, ...plain]);
+    expect(await count()).toBe(10 * 2 + 50);
+    for (let i = 0; i < 10; i++) expect(await count(`tx-${i}`)).toBe(2);
+  });
+
+  it("rolls a failed transaction back and goes on with the next work", async () => {
+    const failing = (async () => {
+      const tx = await client.transaction("write");
+      await tx.execute({ sql: "INSERT INTO rows (kind) VALUES (?)", args: ["undone"] });
+      await tx.rollback();
+    })();
+    const closedUnfinished = (async () => {
+      const tx = await client.transaction("write");
+      await tx.execute({ sql: "INSERT INTO rows (kind) VALUES (?)", args: ["undone"] });
+      tx.close();
+    })();
+    const broken = client.transaction("write").then(async (tx) => {
+      try {
+        await tx.execute("INSERT INTO no_such_table VALUES (1)");
+      } finally {
+        await tx.rollback();
+      }
+    });
+    const after = client.execute({ sql: "INSERT INTO rows (kind) VALUES (?)", args: ["kept"] });
+    await Promise.all([failing, closedUnfinished, expect(broken).rejects.toThrow(/no_such_table/), after]);
+    expect(await count("undone")).toBe(0);
+    expect(await count("kept")).toBe(1);
+  });
+
+  it("keeps a failed statement from blocking the ones behind it", async () => {
+    const results = await Promise.allSettled([
+      client.execute("SELECT * FROM no_such_table"),
+      client.execute({ sql: "INSERT INTO rows (kind) VALUES (?)", args: ["after-error"] }),
+    ]);
+    expect(results.map((result) => result.status)).toEqual(["rejected", "fulfilled"]);
+    expect(await count("after-error")).toBe(1);
+  });
+});
