@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, sql } from "drizzle-orm";
 import { forbidden, redirect } from "next/navigation";
 import { cache } from "react";
 import { getDb } from "@/db/client";
@@ -16,16 +16,13 @@ export interface AccessContext {
   memberships: Array<{ organisationId: string; organisationName: string; role: Role }>;
 }
 
-/**
- * Who is asking, in which organisation, with which role; null when nobody is signed in or the person
- * belongs to no organisation any more. The session's organisation is honoured only while the membership
- * exists; otherwise the person's first organisation is used.
- */
-export const getAccess = cache(async (): Promise<AccessContext | null> => {
-  const { user, session } = await getCurrentSession();
-  if (!user || !session) return null;
-  const db = await getDb();
-  const rows = await db
+type Db = Awaited<ReturnType<typeof getDb>>;
+
+/** Every request that is signed in asks this, so it is prepared once (built SQL is reused, values bound). */
+let membershipsStatement: { db: Db; statement: ReturnType<typeof prepareMemberships> } | undefined;
+
+function prepareMemberships(db: Db) {
+  return db
     .select({
       organisationId: organisations.id,
       organisationName: organisations.name,
@@ -36,8 +33,26 @@ export const getAccess = cache(async (): Promise<AccessContext | null> => {
     })
     .from(memberships)
     .innerJoin(organisations, eq(memberships.organisationId, organisations.id))
-    .where(eq(memberships.userId, user.id))
-    .orderBy(asc(memberships.createdAt));
+    .where(eq(memberships.userId, sql.placeholder("userId")))
+    .orderBy(asc(memberships.createdAt))
+    .prepare();
+}
+
+function membershipsOf(db: Db) {
+  if (membershipsStatement?.db !== db) membershipsStatement = { db, statement: prepareMemberships(db) };
+  return membershipsStatement.statement;
+}
+
+/**
+ * Who is asking, in which organisation, with which role; null when nobody is signed in or the person
+ * belongs to no organisation any more. The session's organisation is honoured only while the membership
+ * exists; otherwise the person's first organisation is used.
+ */
+export const getAccess = cache(async (): Promise<AccessContext | null> => {
+  const { user, session } = await getCurrentSession();
+  if (!user || !session) return null;
+  const db = await getDb();
+  const rows = await membershipsOf(db).all({ userId: user.id });
   if (rows.length === 0) return null;
   const current = rows.find((row) => row.organisationId === session.organisationId) ?? rows[0]!;
   if (current.organisationId !== session.organisationId) {
