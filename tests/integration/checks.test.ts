@@ -14,7 +14,8 @@ import { createLinkAction, emailLinkAction, revokeLinkAction } from "@/app/(work
 import { GET as listChecksRoute } from "@/app/api/v1/checks/route";
 import { GET as checkRoute } from "@/app/api/v1/checks/[id]/route";
 import { POST as evaluateRoute } from "@/app/api/v1/evaluate/route";
-import { getDb } from "@/db/client";
+import { eq } from "drizzle-orm";
+import { databaseHandle, getDb } from "@/db/client";
 import { savedChecks, shareLinks, vehicleProfiles } from "@/db/schema";
 import { resolveShareToken } from "@/lib/server/share-links";
 import { initialFormState } from "@/lib/validation/form-state";
@@ -55,6 +56,19 @@ describe("saving a check", () => {
     expect(row.level).toBe(result.verdict.level);
     expect(row.customerName).toBe("Perpetua Lindgard");
     expect(row.vehicleLabel).toBe(camper.name);
+  });
+
+  it("keeps the result deflated, and still reads a result stored as plain JSON", async () => {
+    const db = await getDb();
+    const { client } = databaseHandle();
+    const stored = (await client.execute({ sql: "SELECT typeof(result) AS kind, length(result) AS bytes FROM saved_checks WHERE id = ?", args: [checkOfA] })).rows[0]!;
+    const row = (await db.select().from(savedChecks).where(eq(savedChecks.id, checkOfA)))[0]!;
+    expect(stored.kind).toBe("blob");
+    expect(Number(stored.bytes)).toBeLessThan(JSON.stringify(row.result).length / 2);
+    // A row from before the result was deflated.
+    await client.execute({ sql: "UPDATE saved_checks SET result = ? WHERE id = ?", args: [JSON.stringify(row.result), checkOfA] });
+    const plain = (await db.select().from(savedChecks).where(eq(savedChecks.id, checkOfA)))[0]!;
+    expect(plain.result).toEqual(row.result);
   });
 
   it("refuses bad input with field errors and stores nothing", async () => {
