@@ -1,7 +1,7 @@
 import { createClient } from "@libsql/client";
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { randomBytes } from "node:crypto";
-import { existsSync, mkdtempSync, rmSync } from "node:fs";
+import { existsSync, mkdtempSync, readFileSync, readdirSync, rmSync } from "node:fs";
 import { createServer } from "node:net";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
@@ -137,4 +137,27 @@ export async function countRows(databaseUrl: string, table: "saved_checks"): Pro
   } finally {
     client.close();
   }
+}
+
+/**
+ * CPU time (user + system, every thread) used so far by the server's process group, in milliseconds, from
+ * /proc: the load tool shares the machine, so req/s alone mixes the server's cost with its neighbours'.
+ * 0 where /proc is missing.
+ */
+export function cpuTimeMs(server: AppServer): number {
+  const group = server.process.pid;
+  if (!group || !existsSync("/proc")) return 0;
+  let ticks = 0;
+  for (const entry of readdirSync("/proc")) {
+    if (!/^\d+$/.test(entry)) continue;
+    try {
+      // The fields after the command's closing parenthesis: state is field 3, pgrp 5, utime 14, stime 15.
+      const fields = readFileSync(`/proc/${entry}/stat`, "utf8").split(") ")[1]!.split(" ");
+      if (Number(fields[2]) === group) ticks += Number(fields[11]) + Number(fields[12]);
+    } catch {
+      // the process ended while we looked
+    }
+  }
+  // Linux counts in clock ticks of 1/100 s (USER_HZ).
+  return ticks * 10;
 }
