@@ -4,7 +4,7 @@ import { mkdirSync } from "node:fs";
 import { dirname, resolve } from "node:path";
 import { env } from "../lib/env";
 import * as schema from "./schema";
-import { serialClient } from "./serial-client";
+import { scopedTransactions, serialClient } from "./serial-client";
 
 export type Database = LibSQLDatabase<typeof schema>;
 
@@ -36,7 +36,8 @@ function open(url: string, authToken: string | undefined): DatabaseHandle {
     }
     await client.execute("PRAGMA foreign_keys = ON");
   })();
-  return { client, db: drizzle(client, { schema }), ready };
+  const db = drizzle(client, { schema });
+  return { client, db: isLocalFile ? scopedTransactions(db) : db, ready };
 }
 
 const globalForDb = globalThis as unknown as { towmarginDb?: DatabaseHandle };

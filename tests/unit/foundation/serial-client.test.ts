@@ -3,7 +3,9 @@ import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
-import { serialClient } from "@/db/serial-client";
+import { drizzle } from "drizzle-orm/libsql";
+import { integer, sqliteTable, text } from "drizzle-orm/sqlite-core";
+import { scopedTransactions, serialClient } from "@/db/serial-client";
 
 let dir: string;
 let client: Client;
@@ -76,5 +78,51 @@ describe("the local database client", () => {
     ]);
     expect(results.map((result) => result.status)).toEqual(["rejected", "fulfilled"]);
     expect(await count("after-error")).toBe(1);
+  });
+
+  it("refuses a query on the outer database made inside a transaction's callback, instead of waiting forever", async () => {
+    const db = scopedTransactions(drizzle(client));
+    const rows = sqliteTable("rows", { id: integer("id").primaryKey(), kind: text("kind").notNull() });
+    const error = await db
+      .transaction(async (tx) => {
+        await tx.insert(rows).values({ kind: "inside" });
+        await db.select().from(rows);
+      })
+      .catch((caught: Error & { cause?: Error }) => caught);
+    // The ORM wraps it as a failed query; the reason is its cause.
+    expect(String((error as Error & { cause?: Error })?.cause?.message)).toMatch(/inside a transaction/);
+    // The transaction was rolled back, and the gate is free again.
+    expect(await count("inside")).toBe(0);
+  });
+
+  it("runs drizzle's transactions and savepoints through the gate, next to plain statements", async () => {
+    const db = scopedTransactions(drizzle(client));
+    const rows = sqliteTable("rows", { id: integer("id").primaryKey(), kind: text("kind").notNull() });
+    const work = db.transaction(async (tx) => {
+      await tx.insert(rows).values({ kind: "outer" });
+      await expect(
+        tx.transaction(async (inner) => {
+          await inner.insert(rows).values({ kind: "savepoint" });
+          throw new Error("undo the savepoint");
+        }),
+      ).rejects.toThrow("undo the savepoint");
+      await tx.insert(rows).values({ kind: "outer" });
+    });
+    const beside = Array.from({ length: 20 }, () => db.insert(rows).values({ kind: "beside" }));
+    await Promise.all([work, ...beside]);
+    expect([await count("outer"), await count("savepoint"), await count("beside")]).toEqual([2, 0, 20]);
+  });
+
+  it("lets the next work in when the client fails to begin a transaction, and refuses to reconnect", async () => {
+    const failing = serialClient({
+      ...client,
+      execute: (stmt: string) => client.execute(stmt),
+      transaction: () => {
+        throw new Error("cannot begin");
+      },
+    } as unknown as Client);
+    await expect(failing.transaction("write")).rejects.toThrow("cannot begin");
+    expect((await failing.execute("SELECT 1")).rows.length).toBe(1);
+    expect(() => client.reconnect()).toThrow(/does not reconnect/);
   });
 });
