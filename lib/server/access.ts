@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, eq, sql } from "drizzle-orm";
 import { forbidden, redirect } from "next/navigation";
 import { cache } from "react";
-import { getDb } from "@/db/client";
+import { getDb, type Database } from "@/db/client";
 import { memberships, organisations, sessions, type Organisation } from "@/db/schema";
 import { can, type Permission, type Role } from "@/lib/roles";
 import { getCurrentSession } from "./session";
@@ -16,12 +16,10 @@ export interface AccessContext {
   memberships: Array<{ organisationId: string; organisationName: string; role: Role }>;
 }
 
-type Db = Awaited<ReturnType<typeof getDb>>;
-
 /** Every request that is signed in asks this, so it is prepared once (built SQL is reused, values bound). */
-let membershipsStatement: { db: Db; statement: ReturnType<typeof prepareMemberships> } | undefined;
+let membershipsStatement: { db: Database; statement: ReturnType<typeof prepareMemberships> } | undefined;
 
-function prepareMemberships(db: Db) {
+function prepareMemberships(db: Database) {
   return db
     .select({
       organisationId: organisations.id,
@@ -38,7 +36,7 @@ function prepareMemberships(db: Db) {
     .prepare();
 }
 
-function membershipsOf(db: Db) {
+function membershipsOf(db: Database) {
   if (membershipsStatement?.db !== db) membershipsStatement = { db, statement: prepareMemberships(db) };
   return membershipsStatement.statement;
 }

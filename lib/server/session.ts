@@ -4,7 +4,7 @@ import { eq, sql } from "drizzle-orm";
 import { Lucia, TimeSpan, type Adapter, type DatabaseSession, type DatabaseUser, type Session, type User } from "lucia";
 import { cookies } from "next/headers";
 import { cache } from "react";
-import { getDb } from "@/db/client";
+import { getDb, type Database } from "@/db/client";
 import { sessions, users } from "@/db/schema";
 import { env } from "@/lib/env";
 
@@ -16,13 +16,11 @@ declare module "lucia" {
   }
 }
 
-type Db = Awaited<ReturnType<typeof getDb>>;
-
 /**
  * The session library's own Drizzle adapter, except for the lookup every signed-in request makes: that is
  * one prepared statement joining the session to its person, where the adapter builds two queries each time.
  */
-function sessionAdapter(db: Db): Adapter {
+function sessionAdapter(db: Database): Adapter {
   const base = new DrizzleSQLiteAdapter(db, sessions, users);
   const lookup = db
     .select({
