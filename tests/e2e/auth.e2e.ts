@@ -28,8 +28,8 @@ describe("signing up", () => {
     await page.getByRole("button", { name: "Create my organisation" }).click();
     await page.getByText("Enter an e-mail address like name@example.com.").waitFor();
     await screenshot(page, "sign-up-errors-desktop");
-    await expect(page.getByText("Use at least 10 characters.").isVisible()).resolves.toBe(true);
-    await expect(page.getByText("Enter your name.").isVisible()).resolves.toBe(true);
+    await page.getByText("Use at least 10 characters.").waitFor();
+    await page.getByText("Enter your name.").waitFor();
   });
 
   it("mails a confirmation link that creates the organisation with its owner", async () => {
@@ -83,14 +83,16 @@ describe("signing in with each role", () => {
         const { page } = session;
         await signIn(page, email);
         expect(await navLabels(page)).toEqual(nav);
-        await expect(page.getByTestId("current-role").innerText()).resolves.toContain(role);
+        await expect.poll(() => page.getByTestId("current-role").innerText()).toContain(role);
         for (const path of ["/team", "/settings", "/mailbox"]) {
           const response = await page.goto(path);
           if (nav.includes("Team")) {
             expect(response?.status(), path).toBe(200);
           } else {
             expect(response?.status(), path).toBe(403);
-            await expect(page.getByRole("heading", { name: "This page is not part of your role" }).isVisible()).resolves.toBe(true);
+            // The refusal is drawn when the page's scripts run (a page that calls forbidden() is rendered in the
+            // browser from the server's payload), so wait for it rather than asking at the load event.
+            await page.getByRole("heading", { name: "This page is not part of your role" }).waitFor();
           }
         }
       } finally {
@@ -193,7 +195,7 @@ describe("inviting a member", () => {
       await invitee.page.getByRole("button", { name: "Join" }).click();
       await invitee.page.waitForURL(/\/overview/);
       expect(await navLabels(invitee.page)).toEqual(["Overview", "Check a rig", "Saved checks", "Fleet", "Training"]);
-      await expect(invitee.page.getByText("You have joined Quillfield Hitch & Trailer.").isVisible()).resolves.toBe(true);
+      await invitee.page.getByText("You have joined Quillfield Hitch & Trailer.").waitFor();
 
       // The link works once.
       const second = await openBrowser();

@@ -45,10 +45,9 @@ describe("training: author, publish, practise, see the result", () => {
     await page.goto(publicUrl);
     await page.getByRole("heading", { name: "A ball mount that rides level" }).waitFor();
     expect(await page.locator('meta[name="robots"]').getAttribute("content")).toMatch(/noindex/);
-    const text = await page.locator("body").innerText();
-    expect(text).toContain("Drop needed to ride level");
-    expect(text).toContain("Local law and a licensed installer have the last word.");
-    expect(text).not.toContain("Quillfield");
+    await page.getByText("Drop needed to ride level").first().waitFor();
+    await page.getByText(/installer have the last word/).first().waitFor();
+    expect(await page.locator("body").innerText()).not.toContain("Quillfield");
     await screenshot(page, "training-public-phone");
   });
 
@@ -62,11 +61,11 @@ describe("training: author, publish, practise, see the result", () => {
     // Source: boating publication how-to; the formula is geometry: 26 − 20 = 6 in drop (here as 152.4 mm)
     await first.getByLabel(/Your answer for/).fill("152.4 mm");
     await first.getByRole("button", { name: "Check" }).click();
-    expect(await first.getByTestId("practice-mark").getAttribute("data-mark")).toBe("right");
+    await expect.poll(() => first.getByTestId("practice-mark").getAttribute("data-mark")).toBe("right");
     const second = page.getByTestId("practice-step-level-error");
     await second.getByLabel(/Your answer for/).fill("3");
     await second.getByRole("button", { name: "Check" }).click();
-    expect(await second.getByTestId("practice-mark").getAttribute("data-mark")).toBe("wrong");
+    await expect.poll(() => second.getByTestId("practice-mark").getAttribute("data-mark")).toBe("wrong");
     await page.getByText("1 of 2 steps right.").waitFor();
     await page.getByRole("button", { name: "Record my result" }).click();
     await page.getByText("Recorded: 1 of 2 steps right.").waitFor();
@@ -78,7 +77,7 @@ describe("training: author, publish, practise, see the result", () => {
     await page.goto("/training/results");
     const row = page.getByTestId("result-row").filter({ hasText: "A ball mount that rides level" });
     await row.waitFor();
-    expect(await row.innerText()).toMatch(/Rowan Teague[\s\S]*1 \/ 2/);
+    await expect.poll(() => row.innerText()).toMatch(/Rowan Teague[\s\S]*1 \/ 2/);
     await screenshot(page, "training-results-desktop");
   });
 });
