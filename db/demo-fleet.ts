@@ -48,7 +48,7 @@ export const FLEET_VEHICLES: Array<{ name: string } & VehiclePart> = [
     load: { occupants: 350, cargo: 1500, hitchHardware: 30 },
   },
   {
-    name: "Yard SUV 11 · Fenwick Ranger",
+    name: "Yard SUV 11 · Fenwick Dunmere",
     vehicle: { towRating: 5000, tongueWeightLimit: 500, gvwr: 5900, curbWeight: 4350, gcwr: 10300, gawrFront: 2900, gawrRear: 3250,
       axleWeights: { front: 2500, rear: 2300 }, wheelbase: 114, rearAxleToHitch: 41, departureAngle: 22 },
     hitch: { class: 3, receiverSize: "2", gtwRating: 5000, twRating: 500, receiverHeight: 17.5, pinToFascia: 5.5 },

@@ -10,7 +10,7 @@ type AccessoryPart = Pick<RigInput, "accessory" | "extender">;
 
 export const DEMO_VEHICLES: Array<{ name: string } & VehiclePart> = [
   {
-    name: "Harrow Ridgeline 2500 pickup",
+    name: "Harrow Rookfield 2500 pickup",
     vehicle: {
       towRating: 5000, towRatingWd: 9000, tongueWeightLimit: 500, tongueWeightLimitWd: 900, gvwr: 7000, curbWeight: 5100,
       gcwr: 14000, gawrFront: 3700, gawrRear: 4000, axleWeights: { front: 3150, rear: 2500 }, wheelbase: 145, rearAxleToHitch: 50, wdRequiredAbove: 5000, departureAngle: 24,
@@ -19,7 +19,7 @@ export const DEMO_VEHICLES: Array<{ name: string } & VehiclePart> = [
     load: { occupants: 350, cargo: 150, hitchHardware: 50 },
   },
   {
-    name: "Stellmark Outrider SUV",
+    name: "Stellmark Wendle SUV",
     vehicle: {
       towRating: 6500, towRatingWd: 6500, tongueWeightLimit: 650, gvwr: 6400, curbWeight: 4800, gcwr: 11500,
       gawrFront: 3200, gawrRear: 3500, axleWeights: { front: 2750, rear: 2525 }, wheelbase: 120, rearAxleToHitch: 45, departureAngle: 22,

@@ -38,7 +38,7 @@ describe("the counter check, saved, shared and withdrawn", () => {
   it("fills a rig from saved profiles and the verdict follows a changed number", async () => {
     const { page } = staff;
     await page.goto("/check");
-    await page.getByLabel("Saved vehicle").selectOption({ label: "Harrow Ridgeline 2500 pickup" });
+    await page.getByLabel("Saved vehicle").selectOption({ label: "Harrow Rookfield 2500 pickup" });
     await page.getByLabel("Saved trailer").selectOption({ label: "Bramblecote 24 travel trailer" });
     const verdict = page.getByTestId("verdict-level").first();
     await expect.poll(() => verdict.getAttribute("data-level")).not.toBe("over");
