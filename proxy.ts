@@ -39,7 +39,7 @@ export const config = {
   matcher: [
     {
       // Pages only: JSON routes and static files get their fixed headers from next.config.ts.
-      source: "/((?!api/|_next/static|_next/image|favicon.ico|robots.txt).*)",
+      source: "/((?!api/|_next/static|_next/image|favicon.ico|robots.txt|manifest.webmanifest|icon.svg|icon-|apple-touch-icon).*)",
       missing: [
         { type: "header", key: "next-router-prefetch" },
         { type: "header", key: "purpose", value: "prefetch" },

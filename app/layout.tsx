@@ -6,6 +6,15 @@ import "./globals.css";
 export const metadata: Metadata = {
   title: { default: "Towmargin", template: "%s · Towmargin" },
   description: "Check a trailer, rack or carrier against every rating of the vehicle and the hitch, and see why.",
+  applicationName: "Towmargin",
+  icons: {
+    icon: [
+      { url: "/favicon.ico", sizes: "16x16 32x32 48x48" },
+      { url: "/icon.svg", type: "image/svg+xml" },
+    ],
+    apple: [{ url: "/apple-touch-icon.png", sizes: "180x180" }],
+  },
+  appleWebApp: { title: "Towmargin", capable: true, statusBarStyle: "default" },
 };
 
 export const viewport: Viewport = {

@@ -481,12 +481,9 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
           ) : null}
 
           <div className="grid grid-cols-1 items-start gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,26rem)] lg:gap-6 xl:grid-cols-[minmax(0,1fr)_minmax(0,30rem)]">
-            <form
-              noValidate
-              onSubmit={(e) => e.preventDefault()}
-              aria-label="Rig figures"
-              className="min-w-0 space-y-4 lg:col-start-1"
-            >
+            {/* A group, not a <form>: the figures are never submitted (the verdict follows each keystroke), and
+                the "save vehicle as profile" dialog inside holds a form of its own, which may not nest in a form. */}
+            <div role="form" aria-label="Rig figures" className="min-w-0 space-y-4 lg:col-start-1">
               <RigCard id="workbench-vehicle" title="Vehicle" summary={<VehicleSummary />} collapsed={collapsed.vehicle} onToggle={() => toggle("vehicle")}>
                 <VehicleFields
                   tools={
@@ -510,7 +507,7 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
                   <AccessoryFields tools={<ProfilePicker label="Saved rack or carrier" options={profiles?.accessories ?? []} onPick={pickAccessory} />} />
                 )}
               </RigCard>
-            </form>
+            </div>
 
             <LiveVerdict control={control} kind={kind} tightMarginRatio={tightMarginRatio} onJump={jump} />
 

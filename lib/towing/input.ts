@@ -230,6 +230,32 @@ export type ParseRigResult =
   | { ok: true; rig: RigInput }
   | { ok: false; fieldErrors: Record<string, string[]> };
 
+/** What a section of the rig holds, in the words a person reads in an error. */
+const SECTION_WORDS: Record<string, string> = {
+  vehicle: "The vehicle section",
+  hitch: "The hitch section",
+  trailer: "The trailer section",
+  ballMount: "The ball mount section",
+  extender: "The extender section",
+  weightDistribution: "The weight-distribution section",
+  load: "The load section",
+  accessory: "The accessory section",
+};
+
+/** zod's own default messages ("Invalid input: expected object, received undefined") are never shown. */
+const VALIDATOR_DEFAULT = /^(Invalid|Unrecognized|Too (small|big)|Expected)\b/;
+
+function ownWords(path: PropertyKey[], message: string, code: string): string {
+  if (!VALIDATOR_DEFAULT.test(message)) return message;
+  const key = path.map(String).join(".");
+  const section = SECTION_WORDS[key] ?? (path.length ? `“${key}”` : "The rig");
+  if (!path.length) return "The rig must be a JSON object with units and a vehicle section.";
+  // zod reports a missing section as an invalid type whose input was undefined.
+  if (code === "invalid_type" && /received undefined/.test(message)) return `${section} is required: send it with the figures you know, or as {} when none are known yet.`;
+  if (code === "invalid_type") return `${section} must be an object of figures.`;
+  return `${section} is not valid here.`;
+}
+
 /** Validate unknown input (a form, a request body, a file). Never throws; error keys are dotted paths. */
 export function parseRig(value: unknown): ParseRigResult {
   const parsed = rigInputSchema.safeParse(value);
@@ -237,7 +263,7 @@ export function parseRig(value: unknown): ParseRigResult {
   const fieldErrors: Record<string, string[]> = {};
   for (const issue of parsed.error.issues) {
     const key = issue.path.length ? issue.path.map(String).join(".") : "rig";
-    (fieldErrors[key] ??= []).push(issue.message);
+    (fieldErrors[key] ??= []).push(ownWords(issue.path, issue.message, issue.code));
   }
   return { ok: false, fieldErrors };
 }
