@@ -94,6 +94,14 @@ interface LiveProps {
  * keystroke besides the field itself. Renders straight into the page grid: the phone's bar, the verdict
  * column and the side view are siblings there.
  */
+/** The verdict sentence without its leading level word ("Over: …"), where a badge beside it already says it. */
+function withoutLevelWord(message: string): string {
+  const cut = message.match(/^[A-Z][a-z]+(?: [a-z]+)?: (.*)$/s);
+  if (!cut) return message;
+  const rest = cut[1]!;
+  return rest.charAt(0).toUpperCase() + rest.slice(1);
+}
+
 function LiveVerdict({ control, kind, tightMarginRatio, onJump }: LiveProps) {
   const values = useWatch({ control }) as RigFormValues;
   const parsed = useMemo(() => parseCandidate(values, kind), [values, kind]);
@@ -144,7 +152,7 @@ function LiveVerdict({ control, kind, tightMarginRatio, onJump }: LiveProps) {
           className="flex w-full items-center gap-3 text-left"
         >
           <VerdictBadge status={level} label={waiting ? `${verdictWords[level]} (waiting)` : undefined} />
-          <span className="min-w-0 flex-1 truncate text-sm text-ink">{result.verdict.message}</span>
+          <span className="min-w-0 flex-1 truncate text-sm text-ink">{withoutLevelWord(result.verdict.message)}</span>
           <span className="inline-flex shrink-0 items-center gap-1 text-sm font-medium text-accent-strong">
             {open ? "Hide" : "Checks"}
             <ChevronDown aria-hidden="true" className={cn("size-4 transition-transform motion-reduce:transition-none", open && "rotate-180")} />
@@ -152,10 +160,15 @@ function LiveVerdict({ control, kind, tightMarginRatio, onJump }: LiveProps) {
         </button>
       </div>
 
+      {/* Phone: the full list opens as a sheet under the bar, wherever the form is scrolled to. Desktop: the
+          column stretches over every row so its panel stays in view (sticky) while the form scrolls. */}
       <aside
         id="workbench-verdict"
         aria-label="Verdict"
-        className={cn("order-first min-w-0 lg:order-none lg:col-start-2 lg:row-span-4 lg:row-start-1 lg:block", open ? "block" : "hidden")}
+        className={cn(
+          "order-first min-w-0 lg:static lg:order-none lg:col-start-2 lg:row-span-4 lg:row-start-1 lg:block lg:max-h-none lg:self-stretch lg:overflow-visible lg:p-0",
+          open ? "fixed inset-x-2 top-16 bottom-2 z-30 block overflow-y-auto overscroll-contain rounded-card" : "hidden",
+        )}
       >
         <div className="space-y-3 lg:sticky lg:top-4 lg:max-h-[calc(100dvh-2rem)] lg:overflow-y-auto lg:pr-1">
           <Card className={cn("px-4 py-4 sm:px-5", waiting && "opacity-95")}>

@@ -2,7 +2,7 @@
  * The workbench's form model: what react-hook-form holds, how typed text becomes a number, and how the held
  * values become a rig the schema can parse. Pure functions, no React, so the tests and the form share them.
  */
-import { convertRig, FIELD_RANGES, type RigInput, type UnitSystem } from "@/lib/towing";
+import { convertRig, FIELD_RANGES, KG_PER_LB, MM_PER_IN, type RigInput, type UnitSystem } from "@/lib/towing";
 import { formatNumber } from "@/lib/format";
 
 type DeepPartial<T> = { [K in keyof T]?: NonNullable<T[K]> extends object ? DeepPartial<NonNullable<T[K]>> : T[K] };
@@ -96,6 +96,20 @@ export function toRigCandidate(values: RigFormValues, kind: HitchedKind): unknow
 function roundForEntry(value: number, unit: string): number {
   const parsed = parseTyped(formatNumber(value, unit));
   return parsed === undefined || Number.isNaN(parsed) ? value : parsed;
+}
+
+/**
+ * One typed figure in the other unit system, rounded as entered figures are (the fleet profile form's unit
+ * switch). Angles and shares pass unchanged; text that is not a number stays as typed for its field error.
+ */
+export function convertTypedFigure(text: string, measure: string, to: UnitSystem): string {
+  if (measure !== "mass" && measure !== "length") return text;
+  const value = parseTyped(text);
+  if (value === undefined || Number.isNaN(value)) return text;
+  const factor = measure === "mass" ? KG_PER_LB : MM_PER_IN;
+  const converted = to === "metric" ? value * factor : value / factor;
+  const unit = measure === "mass" ? (to === "metric" ? "kg" : "lb") : to === "metric" ? "mm" : "in";
+  return String(roundForEntry(converted, unit));
 }
 
 function roundTree(node: Plain, prefix: string, units: UnitSystem): Plain {

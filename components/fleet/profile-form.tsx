@@ -4,6 +4,7 @@ import { useRouter } from "next/navigation";
 import { useMemo, useState, useTransition } from "react";
 import { useForm } from "react-hook-form";
 import { Button, Card, CardBody, CardHeader, Field, FormMessage, NumberInput, Select, TextInput, useToast } from "@/components/ui";
+import { convertTypedFigure } from "@/components/check/rig-form";
 import { FIELDS_BY_KIND, KIND_WORDS, profileValueText, unitFor, type ProfileField, type ProfileKind } from "@/lib/fleet/fields";
 import type { FleetProfile } from "@/lib/server/fleet";
 import { profileFormSchema } from "@/lib/validation/fleet";
@@ -57,6 +58,17 @@ export function ProfileForm({ kind, units: startUnits, profile, action }: Profil
   const units = (form.watch("units") as "imperial" | "metric") ?? startUnits;
   const fields = FIELDS_BY_KIND[kind];
   const groups = [...new Set(fields.map((field) => field.group))];
+
+  // The figures typed so far follow the unit switch, as on the check screen: 3,500 lb becomes 1,588 kg.
+  const [shownUnits, setShownUnits] = useState(startUnits);
+  const convertTyped = (to: string) => {
+    if ((to !== "imperial" && to !== "metric") || to === shownUnits) return;
+    for (const field of fields) {
+      const text = form.getValues(field.path);
+      if (typeof text === "string" && text.trim()) form.setValue(field.path, convertTypedFigure(text, field.measure ?? "", to), { shouldDirty: true });
+    }
+    setShownUnits(to);
+  };
 
   const errorOf = (path: string): string | undefined => {
     let node: unknown = form.formState.errors;
@@ -117,8 +129,8 @@ export function ProfileForm({ kind, units: startUnits, profile, action }: Profil
           <Field label="Name" error={errorOf("name")} required help="What the crews call it: a fleet number and a short description.">
             <TextInput autoComplete="off" {...form.register("name")} />
           </Field>
-          <Field label="Units" error={errorOf("units")} help="The figures below are in these units; changing it does not convert them.">
-            <Select {...form.register("units")}>
+          <Field label="Units" error={errorOf("units")} help="The figures below are in these units; switching converts the figures already typed.">
+            <Select {...form.register("units", { onChange: (event) => convertTyped(event.target.value) })}>
               <option value="imperial">Imperial (lb, in)</option>
               <option value="metric">Metric (kg, mm)</option>
             </Select>
