@@ -1,9 +1,10 @@
 "use client";
-/** Writing or editing a worked example: the text a trainer tells, the check it teaches, and the rig as JSON. */
+/** Writing or editing a worked example: the text a trainer tells, the check it teaches, and its rig (the check screen's cards). */
 import { useRouter } from "next/navigation";
-import { useEffect } from "react";
+import { useCallback, useEffect } from "react";
 import { useActionForm } from "@/components/forms/use-action-form";
 import { Button, Field, FormMessage, Select, TextInput, Textarea } from "@/components/ui";
+import { LessonRigEditor } from "./lesson-rig-editor";
 import { LESSON_FAMILIES } from "@/lib/training/library";
 import type { FormState } from "@/lib/validation/form-state";
 import { lessonSchema, updateLessonSchema } from "@/lib/validation/training";
@@ -29,7 +30,8 @@ export function LessonForm({ action, defaults, submitLabel }: { action: Action; 
   useEffect(() => {
     if (state.ok && madeId) router.push(`/training/lessons/${madeId}`);
   }, [state, madeId, router]);
-  const { register } = form;
+  const { register, setValue } = form;
+  const setRig = useCallback((json: string) => setValue("rig" as never, json as never, { shouldDirty: true }), [setValue]);
   return (
     <form action={formAction} onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
       {defaults.lessonId ? <input type="hidden" {...register("lessonId" as never)} /> : null}
@@ -55,9 +57,19 @@ export function LessonForm({ action, defaults, submitLabel }: { action: Action; 
       <Field label="The rule it shows" help="One or two sentences the learner should remember." required error={errorOf("rule" as never)}>
         <Textarea rows={3} {...register("rule" as never)} />
       </Field>
-      <Field label="Rig (JSON)" help="The vehicle, hitch and load in the evaluate format (docs/evaluate.md). Weights in lb or kg, lengths in in or mm." required error={errorOf("rig" as never)}>
-        <Textarea rows={12} className="font-mono text-[0.8125rem]" spellCheck={false} {...register("rig" as never)} />
-      </Field>
+      <section aria-labelledby="lesson-rig-title" className="space-y-2">
+        <h2 id="lesson-rig-title" className="text-base font-semibold text-ink">
+          The rig
+        </h2>
+        <p className="text-sm text-ink-soft">The vehicle, the hitch and what is hitched, with the check screen&apos;s own fields. Blank means not known: the lesson then shows what is missing.</p>
+        <input type="hidden" {...register("rig" as never)} />
+        {errorOf("rig" as never) ? (
+          <p role="alert" className="text-sm font-medium text-over">
+            {errorOf("rig" as never)}
+          </p>
+        ) : null}
+        <LessonRigEditor initialJson={defaults.rig} onChange={setRig} />
+      </section>
       <FormMessage tone={state.ok ? "success" : "error"}>{state.message}</FormMessage>
       <div>
         <Button type="submit" variant="primary" loading={pending}>

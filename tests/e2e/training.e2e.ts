@@ -40,6 +40,21 @@ describe("training: author, publish, practise, see the result", () => {
     await screenshot(page, "training-lesson-desktop");
   });
 
+  it("a trainer writes an example's rig with the check screen's own fields, and it is kept", async () => {
+    const { page } = trainer;
+    await page.goto("/training/lessons/new");
+    await page.getByLabel("Title").fill("A door-jamb label read at the counter");
+    await page.getByLabel("Story").fill("Ada has a crossover and a small utility trailer, and asks what the label allows.");
+    const gvwr = page.getByLabel("GVWR", { exact: true });
+    await gvwr.fill("7777");
+    await expect.poll(() => page.getByTestId("lesson-rig-json").textContent()).toContain('"gvwr": 7777');
+    await page.getByRole("button", { name: "Save as draft" }).click();
+    await page.waitForURL(/\/training\/lessons\/(?!new$)[A-Za-z0-9_-]+$/);
+    await page.goto(`${new URL(page.url()).pathname}/edit`);
+    await expect.poll(() => page.getByLabel("GVWR", { exact: true }).inputValue()).toBe("7777");
+    await screenshot(page, "training-lesson-rig-editor-desktop");
+  });
+
   it("anyone with the link reads it on a phone, with cautions, not indexed, nothing else of the shop", async () => {
     const { page } = visitor;
     await page.goto(publicUrl);
