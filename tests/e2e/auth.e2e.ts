@@ -70,13 +70,13 @@ describe("signing up", () => {
 
 describe("signing in with each role", () => {
   const cases = [
-    { who: "owner", email: DEMO.owner, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training", "Team", "Organisation", "Mailbox"], role: "Owner" },
-    { who: "counter staff", email: DEMO.staff, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training"], role: "Counter staff" },
-    { who: "trainer", email: DEMO.trainer, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training"], role: "Trainer" },
-    { who: "fleet manager", email: DEMO.fleetManager, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training"], role: "Fleet manager" },
+    { who: "owner", email: DEMO.owner, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training", "Team", "Organisation", "Mailbox"], role: "Owner", start: "The team and this month" },
+    { who: "counter staff", email: DEMO.staff, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training"], role: "Counter staff", start: "Recent checks" },
+    { who: "trainer", email: DEMO.trainer, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training"], role: "Trainer", start: "Courses and learners" },
+    { who: "fleet manager", email: DEMO.fleetManager, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training"], role: "Fleet manager", start: "The fleet's pairings" },
   ];
 
-  for (const { who, email, nav, role } of cases) {
+  for (const { who, email, nav, role, start } of cases) {
     it(`the ${who} sees their navigation and is refused pages outside the role`, async () => {
       const session = await openBrowser();
       try {
@@ -84,6 +84,8 @@ describe("signing in with each role", () => {
         await signIn(page, email);
         expect(await navLabels(page)).toEqual(nav);
         await expect.poll(() => page.getByTestId("current-role").innerText()).toContain(role);
+        // Each role starts from its own work on the overview.
+        await page.getByTestId("role-start").getByRole("heading", { name: start }).waitFor();
         for (const path of ["/team", "/settings", "/mailbox"]) {
           const response = await page.goto(path);
           if (nav.includes("Team")) {

@@ -2,17 +2,12 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { Card, CardBody, CardHeader, FormMessage, PageHeader, buttonClasses } from "@/components/ui";
 import { ROLE_DESCRIPTIONS, ROLE_LABELS, can } from "@/lib/roles";
+import { FleetAtAGlance, RecentChecks, TeamAndActivity, TrainingAtAGlance } from "@/components/overview/role-start";
 import { requirePage } from "@/lib/server/access";
+import { GENERAL_CAUTIONS } from "@/lib/towing";
 
 export const metadata: Metadata = { title: "Overview" };
 
-const CAUTIONS = [
-  "Ratings come from the vehicle maker and the labels on the vehicle and the hitch parts.",
-  "The lowest rating in the chain governs.",
-  "Weigh the loaded rig: estimates are no substitute for a scale.",
-  "Follow each maker's instructions and torque values.",
-  "Local law and a licensed installer have the last word.",
-];
 
 export default async function OverviewPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const access = await requirePage(undefined, "/overview");
@@ -34,6 +29,13 @@ export default async function OverviewPage({ searchParams }: { searchParams: Pro
         }
       />
       {greeting ? <FormMessage tone="success">{greeting}</FormMessage> : null}
+      {/* Each role's start first: what this person opens the product for. */}
+      <div className="grid gap-4 md:grid-cols-2" data-testid="role-start" data-role={role}>
+        {role === "owner" ? <TeamAndActivity access={access} /> : null}
+        {role === "owner" || role === "staff" ? <RecentChecks access={access} /> : null}
+        {role === "fleet_manager" ? <FleetAtAGlance access={access} /> : null}
+        {role === "trainer" ? <TrainingAtAGlance access={access} /> : null}
+      </div>
       <div className="grid gap-4 md:grid-cols-2">
         <Card>
           <CardHeader title="How this organisation counts" description="Settings every check here uses." />
@@ -59,7 +61,7 @@ export default async function OverviewPage({ searchParams }: { searchParams: Pro
           <CardHeader title="Before any verdict" description="Towmargin does the arithmetic; these stay true whatever it says." />
           <CardBody>
             <ul className="list-disc space-y-1.5 pl-5 text-sm leading-relaxed text-ink-soft">
-              {CAUTIONS.map((caution) => (
+              {GENERAL_CAUTIONS.map((caution) => (
                 <li key={caution}>{caution}</li>
               ))}
             </ul>
