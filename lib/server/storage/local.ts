@@ -3,14 +3,14 @@ import { createReadStream } from "node:fs";
 import { mkdir, rm, stat, writeFile } from "node:fs/promises";
 import { dirname, resolve, sep } from "node:path";
 import { Readable } from "node:stream";
+import { checkStorageKey } from "./keys";
 import type { DocumentStore } from "./types";
 
 /** Files under one folder (development, the demo, tests). A key never leaves the folder. */
 export function localStore(root: string): DocumentStore {
   const base = resolve(root);
   const pathOf = (key: string) => {
-    if (!/^[A-Za-z0-9/_.-]+$/.test(key) || key.includes("..")) throw new Error("Invalid storage key.");
-    const path = resolve(base, key);
+    const path = resolve(base, checkStorageKey(key));
     if (!path.startsWith(base + sep)) throw new Error("Invalid storage key.");
     return path;
   };
