@@ -14,7 +14,8 @@ vi.mock("next/headers", async () => (await import("./support/next-mocks")).heade
 vi.mock("next/navigation", async () => (await import("./support/next-mocks")).navigationMock);
 vi.mock("next/cache", async () => (await import("./support/next-mocks")).cacheMock);
 
-import { documentStoreContract, filesUnder } from "./support/document-store-contract";
+import { filesUnder } from "../support/files";
+import { documentStoreContract } from "./support/document-store-contract";
 
 // The folder's parent is watched too, so a key that climbed out of the folder would be seen.
 mkdirSync(`${root}/uploads`, { recursive: true });

@@ -13,14 +13,17 @@ export const PHONE = { width: 375, height: 760 };
 
 export const SCREENSHOT_DIR = join(process.cwd(), "test-results", "screens");
 
-/** A fresh browser profile (its own cookies), so each person in a test is really a different visitor. */
-export async function openBrowser(viewport = DESKTOP): Promise<{ context: BrowserContext; page: Page; close: () => Promise<void> }> {
+/**
+ * A fresh browser profile (its own cookies), so each person in a test is really a different visitor. It opens
+ * the suite's server unless given another one's address.
+ */
+export async function openBrowser(viewport = DESKTOP, appURL = baseURL()): Promise<{ context: BrowserContext; page: Page; close: () => Promise<void> }> {
   const profile = mkdtempSync(join(tmpdir(), "towmargin-chromium-"));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: CHROMIUM_PATH,
     headless: true,
     viewport,
-    baseURL: baseURL(),
+    baseURL: appURL,
     args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
   });
   const page = context.pages()[0] ?? (await context.newPage());

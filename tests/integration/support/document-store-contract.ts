@@ -1,6 +1,4 @@
 import { createHash } from "node:crypto";
-import { readdirSync } from "node:fs";
-import { join, relative, sep } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { saveProfileAction } from "@/app/(workspace)/fleet/actions";
 import { POST as uploadRoute } from "@/app/api/v1/fleet/documents/route";
@@ -21,20 +19,6 @@ export interface StoreBacking {
   /** Every object a key of this store may become, and nothing else, starts with this. */
   prefix: string;
   objects(): string[];
-}
-
-/** Files under a folder, as forward-slash paths relative to it; the fake S3 keeps its objects this way too. */
-export function filesUnder(root: string): string[] {
-  const found: string[] = [];
-  const walk = (dir: string) => {
-    for (const entry of readdirSync(dir, { withFileTypes: true })) {
-      const path = join(dir, entry.name);
-      if (entry.isDirectory()) walk(path);
-      else found.push(relative(root, path).split(sep).join("/"));
-    }
-  };
-  walk(root);
-  return found.sort();
 }
 
 // A 1×1 PNG (its bytes make it a PNG by content).
