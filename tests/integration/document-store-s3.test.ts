@@ -1,4 +1,4 @@
-import { afterAll, vi } from "vitest";
+import { afterAll, describe, expect, it, vi } from "vitest";
 
 // The fake S3 server starts before any module reads the environment, so documentStore() selects S3.
 const fake = await vi.hoisted(async () => {
@@ -19,9 +19,21 @@ vi.mock("next/headers", async () => (await import("./support/next-mocks")).heade
 vi.mock("next/navigation", async () => (await import("./support/next-mocks")).navigationMock);
 vi.mock("next/cache", async () => (await import("./support/next-mocks")).cacheMock);
 
-import { documentStoreContract } from "./support/document-store-contract";
+import { documentStoreContract, PNG } from "./support/document-store-contract";
 
 afterAll(() => fake.close());
 
 // The fake's whole folder is watched, so an object outside the bucket or the prefix would be seen.
 documentStoreContract({ driver: "s3", prefix: `${fake.bucket}/vehicle-documents/`, objects: () => fake.objects() });
+
+describe("the S3 prefix", () => {
+  it("is a folder: a prefix given without its slash keeps keys under it, not beside it", async () => {
+    const { s3Store } = await import("@/lib/server/storage/s3");
+    const { FAKE_S3_CREDENTIALS } = await import("../support/fake-s3");
+    const store = s3Store({ bucket: fake.bucket, region: "us-east-1", endpoint: fake.endpoint, forcePathStyle: true, prefix: "label-archive", ...FAKE_S3_CREDENTIALS });
+    await store.put("org-a/prefix.png", PNG, "image/png");
+    expect(fake.objects()).toContain(`${fake.bucket}/label-archive/org-a/prefix.png`);
+    await store.delete("org-a/prefix.png");
+    expect(fake.objects()).not.toContain(`${fake.bucket}/label-archive/org-a/prefix.png`);
+  });
+});
