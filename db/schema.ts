@@ -36,16 +36,21 @@ export const organisations = sqliteTable("organisations", {
   units: text("units", { enum: ["imperial", "metric"] }).notNull().default("imperial"),
   /** A check whose margin is under this share of its limit is reported as tight. */
   tightMarginRatio: real("tight_margin_ratio").notNull().default(0.1),
+  /** How long a new customer link works unless the person making it chooses otherwise. */
+  linkLifetimeDays: integer("link_lifetime_days").notNull().default(180),
   createdAt: timestampNow(),
 });
 
 export const sessions = sqliteTable(
   "sessions",
   {
+    /** SHA-256 of the session id the cookie carries: a copy of this table opens no session. */
     id: text("id").primaryKey(),
     userId: text("user_id")
       .notNull()
       .references(() => users.id, { onDelete: "cascade" }),
+    /** When the session began: it ends at its absolute lifetime however often it is renewed. */
+    createdAt: timestampNow(),
     /** Seconds since the epoch, as the session library stores it. */
     expiresAt: integer("expires_at").notNull(),
     /** The organisation this session works in; checked against memberships on every request. */
@@ -111,7 +116,6 @@ export const signupRequests = sqliteTable("signup_requests", {
   tokenHash: text("token_hash").primaryKey(),
   email: text("email").notNull(),
   name: text("name").notNull(),
-  passwordHash: text("password_hash").notNull(),
   organisationName: text("organisation_name").notNull(),
   organisationKind: text("organisation_kind", { enum: ["shop", "fleet"] }).notNull(),
   expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),

@@ -37,6 +37,14 @@ const envSchema = z.object({
   S3_PREFIX: z.string().default("vehicle-documents/"),
   /** POST /api/v1/evaluate requests allowed per minute per client address. */
   EVALUATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(120),
+  /**
+   * Reverse proxies in front of the server whose X-Forwarded-For is believed. 0: none, the connection's own
+   * address counts and a forwarding header the client sent is ignored. Set it to the number of proxies.
+   */
+  TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
+  /** Mail sent on a member's behalf (invitations, customer links) per hour: per member, per organisation. */
+  MAIL_LIMIT_PER_MEMBER_PER_HOUR: z.coerce.number().int().min(1).default(30),
+  MAIL_LIMIT_PER_ORGANISATION_PER_HOUR: z.coerce.number().int().min(1).default(100),
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -12,6 +12,7 @@ const { applyMigrations } = await import("../db/migrate");
 const { seedDemo, DEMO_PEOPLE, DEMO_PASSWORD } = await import("../db/seed");
 const { startFakeSmtp } = await import("../lib/dev/fake-smtp");
 const { env } = await import("../lib/env");
+const { demoServerArgs } = await import("../lib/dev/demo-server");
 
 await applyMigrations();
 const { created } = await seedDemo();
@@ -28,7 +29,7 @@ const smtp = await startFakeSmtp(env.SMTP_PORT).catch((error: Error) => {
   process.exit(1);
 });
 
-const server = spawn("npx", ["next", "start", "-p", port], { stdio: ["ignore", "inherit", "inherit"], env: process.env });
+const server = spawn("npx", demoServerArgs(port), { stdio: ["ignore", "inherit", "inherit"], env: process.env });
 
 console.log(`
 Towmargin is starting on ${env.APP_URL}

@@ -1,4 +1,5 @@
-import { LogOut } from "lucide-react";
+import { LogOut, UserRound } from "lucide-react";
+import Link from "next/link";
 import { BrandLink } from "@/components/brand";
 import { Button, Select } from "@/components/ui";
 import { navigationFor } from "@/lib/navigation";
@@ -22,11 +23,16 @@ export function AppShell({ access, mailbox, children }: { access: AccessContext;
           </nav>
           <div className="ml-auto flex min-w-0 items-center gap-3">
             <div className="hidden text-right text-sm leading-tight sm:block">
-              <div className="font-medium text-ink">{access.user.name}</div>
+              <Link href="/account" className="font-medium text-ink underline-offset-2 hover:underline">
+                {access.user.name}
+              </Link>
               <div className="text-ink-soft" data-testid="current-role">
                 {ROLE_LABELS[access.role]} · {access.organisation.name}
               </div>
             </div>
+            <Link href="/account" aria-label="Your account" className="rounded-md p-2 text-ink-soft hover:text-ink sm:hidden">
+              <UserRound aria-hidden="true" className="size-4" />
+            </Link>
             <form action={signOut}>
               <Button type="submit" variant="quiet" size="sm" aria-label="Sign out">
                 <LogOut aria-hidden="true" className="size-4" />

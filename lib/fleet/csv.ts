@@ -188,7 +188,7 @@ export function parseFleetCsv(text: string, kind: ProfileKind, unitsChoice: Unit
     if (cells.length > columns.length && cells.slice(columns.length).some((extra) => extra.trim() !== "")) {
       errors.push({ column: "row", message: `The row has ${cells.length} values for ${columns.length} columns.` });
     }
-    const name = (cell("name") ?? "").trim();
+    const name = unprotectCell(cell("name") ?? "").trim();
 
     const rowUnits = readUnits(cell("units"));
     let units: "imperial" | "metric" | undefined;
@@ -260,9 +260,16 @@ function buildFromValues(kind: ProfileKind, values: Map<string, unknown>): Recor
   return data;
 }
 
-/** A cell a spreadsheet would run as a formula is kept as text. */
+const FORMULA_START = /^[=+\-@\t\r]/;
+
+/** A cell a spreadsheet would run as a formula is kept as text: an apostrophe goes in front. */
 function safeCell(text: string): string {
-  return /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
+  return FORMULA_START.test(text) ? `'${text}` : text;
+}
+
+/** The reverse on import: the apostrophe that protected a formula-looking cell goes; any other stays. */
+function unprotectCell(text: string): string {
+  return text.startsWith("'") && FORMULA_START.test(text.slice(1)) ? text.slice(1) : text;
 }
 
 /** The organisation's profiles of one kind as CSV, in the import's own columns (so an export imports again). */

@@ -5,7 +5,7 @@ import { cache } from "react";
 import { getDb, type Database } from "@/db/client";
 import { memberships, organisations, sessions, type Organisation } from "@/db/schema";
 import { can, type Permission, type Role } from "@/lib/roles";
-import { getCurrentSession } from "./session";
+import { getCurrentSession, sessionKey } from "./session";
 
 export interface AccessContext {
   user: { id: string; email: string; name: string };
@@ -54,7 +54,7 @@ export const getAccess = cache(async (): Promise<AccessContext | null> => {
   if (rows.length === 0) return null;
   const current = rows.find((row) => row.organisationId === session.organisationId) ?? rows[0]!;
   if (current.organisationId !== session.organisationId) {
-    await db.update(sessions).set({ organisationId: current.organisationId }).where(eq(sessions.id, session.id));
+    await db.update(sessions).set({ organisationId: current.organisationId }).where(eq(sessions.id, sessionKey(session.id)));
   }
   return {
     user: { id: user.id, email: user.email, name: user.name },
@@ -108,6 +108,6 @@ export async function switchOrganisation(organisationId: string): Promise<boolea
     .where(and(eq(memberships.userId, access.user.id), eq(memberships.organisationId, organisationId)))
     .get();
   if (!member) return false;
-  await db.update(sessions).set({ organisationId }).where(eq(sessions.id, access.sessionId));
+  await db.update(sessions).set({ organisationId }).where(eq(sessions.id, sessionKey(access.sessionId)));
   return true;
 }

@@ -35,6 +35,15 @@ export async function sendMail(mail: OutgoingMail): Promise<boolean> {
   }
 }
 
+/**
+ * Hands the message to the relay without waiting for it: for answers that must not take longer when a mail
+ * goes out (a reset asked for a known address answers as fast as one for an unknown address). Failures are
+ * logged by sendMail.
+ */
+export function sendMailInBackground(mail: OutgoingMail): void {
+  setImmediate(() => void sendMail(mail));
+}
+
 export function absoluteUrl(path: string): string {
   return new URL(path, env.APP_URL).toString();
 }

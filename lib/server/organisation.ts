@@ -7,11 +7,20 @@ import type { OrganisationSettingsInput } from "@/lib/validation/auth";
 import type { AccessContext } from "./access";
 import { AccessDenied } from "./team";
 
+/** How long a new customer link works unless the person making it chooses otherwise (days). */
+export async function linkLifetimeDays(access: AccessContext): Promise<number> {
+  const db = await getDb();
+  const row = await db.select({ days: organisations.linkLifetimeDays }).from(organisations).where(eq(organisations.id, access.organisation.id)).get();
+  return row?.days ?? DEFAULT_LINK_LIFETIME_DAYS;
+}
+
+export const DEFAULT_LINK_LIFETIME_DAYS = 180;
+
 export async function updateOrganisationSettings(access: AccessContext, input: OrganisationSettingsInput) {
   if (!can(access.role, "organisation.manage")) throw new AccessDenied("organisation.manage");
   const db = await getDb();
   await db
     .update(organisations)
-    .set({ name: input.name, units: input.units, tightMarginRatio: input.tightMarginPercent / 100 })
+    .set({ name: input.name, units: input.units, tightMarginRatio: input.tightMarginPercent / 100, linkLifetimeDays: input.linkLifetimeDays })
     .where(eq(organisations.id, access.organisation.id));
 }

@@ -1,8 +1,13 @@
 import "server-only";
 
 /**
- * A fixed-window counter kept in this process's memory. Enough for one server; a chain of shops behind
- * several servers would move the buckets to a shared store (see DEVELOPERS.md).
+ * Fixed-window counters. Every limit in the app goes through `consume()`, which answers a promise so that
+ * the buckets can move to a shared store (a database table, one UPSERT … RETURNING per check) without
+ * touching a caller. Here they live in this process's memory: enough for one server.
+ *
+ * The table is bounded: when it is full, the oldest bucket goes first (a Map keeps insertion order, and a
+ * bucket whose window starts again is moved to the end), so a flood of new names evicts only as many old
+ * counters as it adds, never every counter at once.
  */
 interface Bucket {
   count: number;
@@ -10,17 +15,18 @@ interface Bucket {
 }
 
 const buckets = new Map<string, Bucket>();
-const MAX_BUCKETS = 50_000;
+export const MAX_BUCKETS = 50_000;
 
 export interface RateLimitResult {
   allowed: boolean;
   retryAfterSeconds: number;
 }
 
-export function consume(key: string, limit: number, windowMs: number, now = Date.now()): RateLimitResult {
+export async function consume(key: string, limit: number, windowMs: number, now = Date.now()): Promise<RateLimitResult> {
   let bucket = buckets.get(key);
   if (!bucket || bucket.resetAt <= now) {
-    if (buckets.size >= MAX_BUCKETS) sweep(now);
+    buckets.delete(key);
+    while (buckets.size >= MAX_BUCKETS) buckets.delete(buckets.keys().next().value!);
     bucket = { count: 0, resetAt: now + windowMs };
     buckets.set(key, bucket);
   }
@@ -29,11 +35,6 @@ export function consume(key: string, limit: number, windowMs: number, now = Date
     allowed: bucket.count <= limit,
     retryAfterSeconds: Math.max(1, Math.ceil((bucket.resetAt - now) / 1000)),
   };
-}
-
-function sweep(now: number) {
-  for (const [key, bucket] of buckets) if (bucket.resetAt <= now) buckets.delete(key);
-  if (buckets.size >= MAX_BUCKETS) buckets.clear();
 }
 
 /** For tests only. */

@@ -1,15 +1,27 @@
 import "server-only";
 import { headers } from "next/headers";
+import { env } from "@/lib/env";
 
 /**
- * The client's address for rate limits: the last hop of X-Forwarded-For. Next.js fills the header from the
- * socket when it is absent, and a reverse proxy appends the address it saw, so the last hop is the one the
- * nearest trusted party wrote; earlier hops are whatever the client claimed. A server exposed with no proxy
- * in front can be sent a made-up header, so put one in front in production (the per-account limit holds
- * either way).
+ * The header that carries the address of the connection itself. `instrumentation.ts` writes it on every
+ * request the server receives, over anything the client sent under that name, so it cannot be made up.
  */
-export async function clientAddress(): Promise<string> {
-  const list = await headers();
+export const PEER_ADDRESS_HEADER = "x-towmargin-peer";
+
+/**
+ * The client's address for rate limits, given how many reverse proxies in front of the server are trusted.
+ * With none (the default), forwarding headers are the client's own words and are ignored: the connection's
+ * address counts. With N, the address the Nth proxy from the server appended to X-Forwarded-For counts
+ * (each proxy appends the address it saw; what stands before them is whatever the client claimed).
+ */
+export function clientAddressFrom(list: Headers, trustedHops: number): string {
+  const peer = list.get(PEER_ADDRESS_HEADER)?.trim() || "unknown";
+  if (trustedHops <= 0) return peer;
   const hops = list.get("x-forwarded-for")?.split(",").map((hop) => hop.trim()).filter(Boolean) ?? [];
-  return hops.at(-1) || list.get("x-real-ip") || "direct";
+  if (hops.length === 0) return peer;
+  return hops[Math.max(0, hops.length - trustedHops)]!;
+}
+
+export async function clientAddress(): Promise<string> {
+  return clientAddressFrom(await headers(), env.TRUSTED_PROXY_HOPS);
 }

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, desc, eq, isNull } from "drizzle-orm";
+import { and, desc, eq, gt, isNull, or } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { organisations, savedChecks, shareLinks } from "@/db/schema";
 import { can } from "@/lib/roles";
@@ -7,6 +7,8 @@ import type { RigInput } from "@/lib/towing/input";
 import type { RigResult } from "@/lib/towing/types";
 import type { AccessContext } from "./access";
 import { absoluteUrl, composeMail, sendMail } from "./mail";
+import { limitMemberMail } from "./mail-limits";
+import { linkLifetimeDays } from "./organisation";
 import { AccessDenied } from "./team";
 import { hashToken, newId, newShareToken } from "./tokens";
 
@@ -25,13 +27,15 @@ async function checkBelongs(access: AccessContext, checkId: string) {
 
 /**
  * Makes a link for one saved check. The token (192 random bits) is returned once, to show and mail; only its
- * hash is stored, so a lost link cannot be read back, only replaced.
+ * hash is stored, so a lost link cannot be read back, only replaced. Every link ends: after the days chosen,
+ * or the organisation's usual lifetime (180 days unless the owner set another in the settings).
  */
 export async function createShareLink(access: AccessContext, checkId: string, expiresInDays?: number) {
   if (!can(access.role, "checks.save")) throw new AccessDenied("checks.save");
   if (!(await checkBelongs(access, checkId))) return null;
   const token = newShareToken();
-  const expiresAt = expiresInDays ? new Date(Date.now() + expiresInDays * 86_400_000) : null;
+  const days = expiresInDays ?? (await linkLifetimeDays(access));
+  const expiresAt = new Date(Date.now() + days * 86_400_000);
   const db = await getDb();
   const id = newId();
   await db.insert(shareLinks).values({
@@ -74,16 +78,29 @@ export async function revokeShareLink(access: AccessContext, linkId: string): Pr
   return revoked.length === 1;
 }
 
-/** Mails a link the caller holds (just created) to the customer, after checking it opens this check. */
+/**
+ * Mails a link the caller holds (just created) to the customer, after checking it still opens this check
+ * (not withdrawn, not expired) and that the member and the organisation are within their hourly mail limit.
+ */
 export async function emailShareLink(access: AccessContext, checkId: string, token: string, email: string) {
   if (!can(access.role, "checks.save")) throw new AccessDenied("checks.save");
   const db = await getDb();
   const link = await db
     .select({ id: shareLinks.id })
     .from(shareLinks)
-    .where(and(eq(shareLinks.tokenHash, hashToken(token)), eq(shareLinks.savedCheckId, checkId), eq(shareLinks.organisationId, access.organisation.id), isNull(shareLinks.revokedAt)))
+    .where(
+      and(
+        eq(shareLinks.tokenHash, hashToken(token)),
+        eq(shareLinks.savedCheckId, checkId),
+        eq(shareLinks.organisationId, access.organisation.id),
+        isNull(shareLinks.revokedAt),
+        or(isNull(shareLinks.expiresAt), gt(shareLinks.expiresAt, new Date())),
+      ),
+    )
     .get();
   if (!link) return { ok: false as const, message: "That link is not open any more. Make a new one." };
+  const limited = await limitMemberMail(access);
+  if (limited) return { ok: false as const, message: limited };
   const check = await checkBelongs(access, checkId);
   const url = shareUrl(token);
   const mail = composeMail({
@@ -97,7 +114,9 @@ export async function emailShareLink(access: AccessContext, checkId: string, tok
     actionUrl: url,
     footer: `Sent by ${access.organisation.name} through Towmargin. The link needs no account.`,
   });
-  const sent = await sendMail({ to: email, subject: `Your towing check from ${access.organisation.name}`, ...mail });
+  // The shop's name (typed by whoever signed up) stays out of the subject: a fixed subject cannot be made
+  // into someone else's message.
+  const sent = await sendMail({ to: email, subject: "Your towing check result from Towmargin", ...mail });
   return sent ? { ok: true as const } : { ok: false as const, message: "The mail could not be sent just now. Try again in a moment." };
 }
 

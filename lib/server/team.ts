@@ -1,11 +1,12 @@
 import "server-only";
-import { and, asc, count, desc, eq, gt, isNull } from "drizzle-orm";
+import { and, asc, desc, eq, gt, isNull, sql } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { invitations, memberships, organisations, users } from "@/db/schema";
 import { can, ROLE_LABELS, type Permission, type Role } from "@/lib/roles";
 import type { InviteInput } from "@/lib/validation/auth";
 import type { AccessContext } from "./access";
 import { absoluteUrl, composeMail, sendMail } from "./mail";
+import { limitMemberMail } from "./mail-limits";
 import { hashPassword } from "./passwords";
 import { hashToken, newId, newToken } from "./tokens";
 
@@ -49,6 +50,8 @@ export async function inviteMember(access: AccessContext, input: InviteInput): P
     .where(and(eq(memberships.organisationId, organisationId), eq(users.email, input.email)))
     .get();
   if (existing) return { ok: false, field: "email", message: "This person is already a member." };
+  const limited = await limitMemberMail(access);
+  if (limited) return { ok: false, message: limited };
 
   const token = newToken();
   // A new invitation to the same address replaces the old one, so only the newest link works.
@@ -79,19 +82,10 @@ export async function inviteMember(access: AccessContext, input: InviteInput): P
     actionUrl: link,
     footer: "If you did not expect this, ignore this message: nothing happens until the link is opened.",
   });
-  const sent = await sendMail({ to: input.email, subject: `Invitation to ${access.organisation.name}`, ...mail });
+  // The subject is ours alone: names typed by whoever signed up stay in the body, where they read as a quote.
+  const sent = await sendMail({ to: input.email, subject: "You are invited to a team on Towmargin", ...mail });
   if (!sent) return { ok: false, message: "The invitation is saved, but the mail could not be sent. Try again in a moment." };
   return { ok: true };
-}
-
-async function countOwners(organisationId: string) {
-  const db = await getDb();
-  const row = await db
-    .select({ owners: count() })
-    .from(memberships)
-    .where(and(eq(memberships.organisationId, organisationId), eq(memberships.role, "owner")))
-    .get();
-  return row?.owners ?? 0;
 }
 
 async function findMembership(organisationId: string, membershipId: string) {
@@ -103,15 +97,28 @@ async function findMembership(organisationId: string, membershipId: string) {
     .get();
 }
 
+/**
+ * True when the row is not an owner's, or another owner of the organisation remains. Evaluated inside the
+ * same UPDATE or DELETE statement, so two owners demoting or removing each other at once cannot both pass:
+ * SQLite runs one statement at a time, and the second sees the first one's result.
+ */
+function anotherOwnerRemains(organisationId: string) {
+  return sql`(${memberships.role} <> 'owner' OR (SELECT count(*) FROM ${memberships} AS others WHERE others.organisation_id = ${organisationId} AND others.role = 'owner' AND others.id <> ${memberships.id}) > 0)`;
+}
+
 export async function changeRole(access: AccessContext, membershipId: string, role: Role): Promise<TeamResult> {
   assertCan(access, "team.manage");
   const membership = await findMembership(access.organisation.id, membershipId);
   if (!membership) return { ok: false, message: "That member is not in this organisation." };
-  if (membership.role === "owner" && role !== "owner" && (await countOwners(access.organisation.id)) <= 1) {
+  const db = await getDb();
+  const changed = await db
+    .update(memberships)
+    .set({ role })
+    .where(and(eq(memberships.id, membershipId), eq(memberships.organisationId, access.organisation.id), role === "owner" ? undefined : anotherOwnerRemains(access.organisation.id)))
+    .returning({ id: memberships.id });
+  if (changed.length === 0) {
     return { ok: false, field: "role", message: "An organisation needs at least one owner. Make someone else owner first." };
   }
-  const db = await getDb();
-  await db.update(memberships).set({ role }).where(and(eq(memberships.id, membershipId), eq(memberships.organisationId, access.organisation.id)));
   return { ok: true };
 }
 
@@ -119,11 +126,12 @@ export async function removeMember(access: AccessContext, membershipId: string):
   assertCan(access, "team.manage");
   const membership = await findMembership(access.organisation.id, membershipId);
   if (!membership) return { ok: false, message: "That member is not in this organisation." };
-  if (membership.role === "owner" && (await countOwners(access.organisation.id)) <= 1) {
-    return { ok: false, message: "An organisation needs at least one owner." };
-  }
   const db = await getDb();
-  await db.delete(memberships).where(and(eq(memberships.id, membershipId), eq(memberships.organisationId, access.organisation.id)));
+  const removed = await db
+    .delete(memberships)
+    .where(and(eq(memberships.id, membershipId), eq(memberships.organisationId, access.organisation.id), anotherOwnerRemains(access.organisation.id)))
+    .returning({ id: memberships.id });
+  if (removed.length === 0) return { ok: false, message: "An organisation needs at least one owner." };
   return { ok: true };
 }
 

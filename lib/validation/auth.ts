@@ -30,7 +30,6 @@ export const signInSchema = z.object({
 export const signUpSchema = z.object({
   name: personName,
   email: emailField,
-  password: newPasswordField,
   organisationName: z
     .string({ error: "Name your shop or fleet." })
     .trim()
@@ -46,6 +45,31 @@ export const resetPasswordSchema = z
     token: z.string().min(10).max(200),
     password: newPasswordField,
     confirmPassword: z.string(),
+  })
+  .refine((value) => value.password === value.confirmPassword, {
+    path: ["confirmPassword"],
+    message: "The two passwords differ.",
+  });
+
+const linkToken = z.string({ error: "This link is not complete. Open it again from the mail." }).min(10, "This link is not complete. Open it again from the mail.").max(200, "This link is not complete. Open it again from the mail.");
+
+/** The sign-up link's page: the password is chosen here, once the address has proved it reads its mail. */
+export const confirmSignupSchema = z
+  .object({
+    token: linkToken,
+    password: newPasswordField,
+    confirmPassword: z.string({ error: "Type the password again." }),
+  })
+  .refine((value) => value.password === value.confirmPassword, {
+    path: ["confirmPassword"],
+    message: "The two passwords differ.",
+  });
+
+export const changePasswordSchema = z
+  .object({
+    currentPassword: z.string({ error: "Enter your current password." }).min(1, "Enter your current password.").max(128, "That password is too long."),
+    password: newPasswordField,
+    confirmPassword: z.string({ error: "Type the new password again." }),
   })
   .refine((value) => value.password === value.confirmPassword, {
     path: ["confirmPassword"],
@@ -75,15 +99,39 @@ export const organisationSettingsSchema = z.object({
     .number({ error: "Enter a percentage." })
     .min(1, "Use at least 1 %.")
     .max(50, "Use at most 50 %."),
+  linkLifetimeDays: z.coerce
+    .number({ error: "Enter a number of days." })
+    .int("Use whole days.")
+    .min(1, "Use at least 1 day.")
+    .max(730, "Use at most 730 days (two years)."),
 });
 
 export type SignInInput = z.infer<typeof signInSchema>;
 export type SignUpInput = z.infer<typeof signUpSchema>;
+export type ConfirmSignupInput = z.infer<typeof confirmSignupSchema>;
+export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;
 export type InviteInput = z.infer<typeof inviteSchema>;
 export type OrganisationSettingsInput = z.infer<typeof organisationSettingsSchema>;
 
-/** Only same-site paths may be a place to return to after sign-in. */
+const RETURN_BASE = "https://towmargin.invalid";
+
+/**
+ * Only a path of this app may be a place to return to after sign-in. The value is resolved the way a browser
+ * resolves a Location header (which drops tabs and newlines and reads a backslash as a slash), and only the
+ * path, query and fragment are kept when it stays on the app's own origin. Control characters, backslashes
+ * and encoded slashes or backslashes are refused outright: a proxy or framework may decode them on the way.
+ */
 export function safeReturnPath(next: string | undefined | null): string {
-  if (!next || !next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")) return "/overview";
-  return next;
+  const fallback = "/overview";
+  if (!next || !next.startsWith("/")) return fallback;
+  if (/[\u0000-\u001f\u007f-\u009f\\]|\s/.test(next) || /%(2f|5c|0[0-9a-f]|1[0-9a-f]|7f)/i.test(next)) return fallback;
+  let url: URL;
+  try {
+    url = new URL(next, `${RETURN_BASE}/sign-in`);
+  } catch {
+    return fallback;
+  }
+  if (url.origin !== RETURN_BASE) return fallback;
+  const path = `${url.pathname}${url.search}${url.hash}`;
+  return path.startsWith("//") ? fallback : path;
 }

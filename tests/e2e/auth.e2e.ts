@@ -181,12 +181,12 @@ describe("inviting a member", () => {
       await screenshot(owner.page, "team-desktop");
 
       const mail = await latestMailTo("wren@quillfield.example.com");
-      expect(mail.subject).toBe("Invitation to Quillfield Hitch & Trailer");
+      expect(mail.subject).toBe("You are invited to a team on Towmargin");
       const link = firstLink(mail.text, "/invite/");
 
       // The owner can read the same message in the development mailbox.
       await owner.page.goto("/mailbox");
-      await owner.page.getByRole("link", { name: "Invitation to Quillfield Hitch & Trailer" }).first().click();
+      await owner.page.getByRole("link", { name: "You are invited to a team on Towmargin" }).first().click();
       await owner.page.getByText("Text part").waitFor();
 
       await invitee.page.goto(link);

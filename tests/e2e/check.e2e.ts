@@ -105,7 +105,7 @@ describe("the counter check, saved, shared and withdrawn", () => {
     await page.getByLabel("Customer's e-mail").fill("hollis@ambersmith.example.com");
     await page.getByRole("button", { name: "E-mail the link" }).click();
     const mail = await latestMailTo("hollis@ambersmith.example.com");
-    expect(mail.subject).toBe("Your towing check from Quillfield Hitch & Trailer");
+    expect(mail.subject).toBe("Your towing check result from Towmargin");
     expect(firstLink(mail.text, "/r/")).toBe(linkUrl);
     expect(mail.html).toContain(linkUrl);
     await screenshot(page, "saved-check-desktop");

@@ -186,8 +186,9 @@ const TARGETS: Target[] = [
       { path: "name", kind: "requiredText", required: true },
       { path: "units", kind: "enum", required: true },
       { path: "tightMarginPercent", kind: "formNumber", required: true },
+      { path: "linkLifetimeDays", kind: "formNumber", required: true },
     ],
-    base: () => ({ name: "Alder Lane Hitch", units: "imperial", tightMarginPercent: "10" }),
+    base: () => ({ name: "Alder Lane Hitch", units: "imperial", tightMarginPercent: "10", linkLifetimeDays: "180" }),
     call: (input) => fromAction(() => saveSettings(initialFormState, input as FormData)),
   },
   {

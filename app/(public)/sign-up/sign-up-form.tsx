@@ -8,7 +8,6 @@ export function SignUpForm() {
   const { form, state, pending, formAction, onSubmit, errorOf } = useActionForm(signUpSchema, signUp, {
     name: "",
     email: "",
-    password: "",
     organisationName: "",
     organisationKind: "shop",
   });
@@ -21,11 +20,8 @@ export function SignUpForm() {
       <Field label="Your name" error={errorOf("name")} required>
         <TextInput autoComplete="name" {...form.register("name")} />
       </Field>
-      <Field label="E-mail" help="We send a link here to confirm it is yours." error={errorOf("email")} required>
+      <Field label="E-mail" help="We send a link here to confirm it is yours. You choose your password on the page it opens." error={errorOf("email")} required>
         <TextInput type="email" autoComplete="email" {...form.register("email")} />
-      </Field>
-      <Field label="Password" help="At least 10 characters." error={errorOf("password")} required>
-        <TextInput type="password" autoComplete="new-password" {...form.register("password")} />
       </Field>
       <Field label="Shop or fleet name" error={errorOf("organisationName")} required>
         <TextInput autoComplete="organization" {...form.register("organisationName")} />

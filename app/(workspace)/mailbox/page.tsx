@@ -19,7 +19,7 @@ export default async function MailboxPage() {
       <PageHeader
         eyebrow="Demo and development only"
         title="Mailbox"
-        description="Every message the local mail server caught, newest first. Nothing here left this machine. In production this page does not exist."
+        description="What the local mail server caught for your organisation's members and the people it invited, newest first. Nothing here left this machine. In production this page does not exist."
       />
       <Card>
         <Table caption="Captured mail" hideCaption>

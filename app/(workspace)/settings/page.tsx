@@ -1,12 +1,15 @@
 import type { Metadata } from "next";
 import { Card, CardBody, PageHeader } from "@/components/ui";
 import { requirePage } from "@/lib/server/access";
+import { linkLifetimeDays } from "@/lib/server/organisation";
 import { SettingsForm } from "./settings-form";
 
 export const metadata: Metadata = { title: "Organisation" };
 
 export default async function SettingsPage() {
-  const { organisation } = await requirePage("organisation.manage", "/settings");
+  const access = await requirePage("organisation.manage", "/settings");
+  const { organisation } = access;
+  const lifetime = await linkLifetimeDays(access);
   return (
     <div className="flex flex-col gap-6">
       <PageHeader title="Organisation" description="How checks are counted and shown for everyone here." />
@@ -17,6 +20,7 @@ export default async function SettingsPage() {
               name: organisation.name,
               units: organisation.units,
               tightMarginPercent: Math.round(organisation.tightMarginRatio * 1000) / 10,
+              linkLifetimeDays: lifetime,
             }}
           />
         </CardBody>

@@ -4,7 +4,7 @@ import { Button, Field, FormMessage, NumberInput, Select, TextInput } from "@/co
 import { organisationSettingsSchema } from "@/lib/validation/auth";
 import { saveSettings } from "./actions";
 
-export function SettingsForm({ defaults }: { defaults: { name: string; units: "imperial" | "metric"; tightMarginPercent: number } }) {
+export function SettingsForm({ defaults }: { defaults: { name: string; units: "imperial" | "metric"; tightMarginPercent: number; linkLifetimeDays: number } }) {
   const { form, state, pending, formAction, onSubmit, errorOf } = useActionForm(organisationSettingsSchema, saveSettings, defaults);
   return (
     <form action={formAction} onSubmit={onSubmit} noValidate className="flex max-w-xl flex-col gap-5">
@@ -25,6 +25,14 @@ export function SettingsForm({ defaults }: { defaults: { name: string; units: "i
         required
       >
         <NumberInput unit="%" {...form.register("tightMarginPercent")} />
+      </Field>
+      <Field
+        label="Customer links work for"
+        help="Unless whoever makes a link chooses otherwise. Every link ends; it can be withdrawn sooner at any time."
+        error={errorOf("linkLifetimeDays")}
+        required
+      >
+        <NumberInput unit="days" {...form.register("linkLifetimeDays")} />
       </Field>
       <div>
         <Button type="submit" loading={pending}>

@@ -2,7 +2,7 @@ import { getDb } from "@/db/client";
 import { applyMigrations } from "@/db/migrate";
 import { invitations, memberships, organisations, sessions, users } from "@/db/schema";
 import type { Role } from "@/lib/roles";
-import { getLucia } from "@/lib/server/session";
+import { getLucia, sessionKey } from "@/lib/server/session";
 import { hashToken } from "@/lib/server/tokens";
 import { cookieJar } from "./next-mocks";
 
@@ -68,7 +68,7 @@ export async function sessionOrganisation(): Promise<string | null> {
   const lucia = await getLucia();
   const id = cookieJar.get(lucia.sessionCookieName);
   const rows = await db.select().from(sessions);
-  return rows.find((row) => row.id === id)?.organisationId ?? null;
+  return rows.find((row) => id !== undefined && row.id === sessionKey(id))?.organisationId ?? null;
 }
 
 export function form(values: Record<string, string>): FormData {

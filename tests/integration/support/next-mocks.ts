@@ -13,6 +13,17 @@ export class NavigationSignal extends Error {
 
 export const cookieJar = new Map<string, string>();
 
+/**
+ * The request's headers as a test wants them: by default one client at 203.0.113.7 (the connection's
+ * address, and the same in a forwarding header). A test may change them and must put them back.
+ */
+export const DEFAULT_REQUEST_HEADERS: Record<string, string> = { "x-forwarded-for": "203.0.113.7", "x-towmargin-peer": "203.0.113.7" };
+export const requestHeaders = new Map<string, string>(Object.entries(DEFAULT_REQUEST_HEADERS));
+export function resetRequestHeaders() {
+  requestHeaders.clear();
+  for (const [key, value] of Object.entries(DEFAULT_REQUEST_HEADERS)) requestHeaders.set(key, value);
+}
+
 export const headersMock = {
   cookies: async () => ({
     get: (name: string) => (cookieJar.has(name) ? { name, value: cookieJar.get(name)! } : undefined),
@@ -22,7 +33,7 @@ export const headersMock = {
     },
     delete: (name: string) => cookieJar.delete(name),
   }),
-  headers: async () => new Headers({ "x-forwarded-for": "203.0.113.7" }),
+  headers: async () => new Headers([...requestHeaders]),
 };
 
 export const navigationMock = {

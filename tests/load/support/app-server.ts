@@ -1,10 +1,11 @@
 import { createClient } from "@libsql/client";
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
-import { randomBytes } from "node:crypto";
+import { createHash, randomBytes } from "node:crypto";
 import { existsSync, mkdtempSync, readFileSync, readdirSync, rmSync } from "node:fs";
 import { createServer } from "node:net";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
+import { sessionCookieSettings } from "../../../lib/server/session-cookie";
 
 /**
  * A production server of this tree on a free loopback port, over its own seeded SQLite file: the bench and
@@ -122,9 +123,11 @@ export async function sessionCookieFor(databaseUrl: string, email: string): Prom
     const id = randomBytes(20).toString("hex");
     await client.execute({
       sql: "INSERT INTO sessions (id, user_id, expires_at, organisation_id) VALUES (?, ?, ?, ?)",
-      args: [id, String(user.id), Math.floor(Date.now() / 1000) + 86_400, String(user.organisation_id)],
+      // The table keys a session by the SHA-256 of the id the cookie carries (lib/server/session.ts).
+      args: [createHash("sha256").update(id).digest("hex"), String(user.id), Math.floor(Date.now() / 1000) + 86_400, String(user.organisation_id)],
     });
-    return `towmargin_session=${id}`;
+    // `next start` is a production server: the cookie has the __Host- prefix (lib/server/session-cookie.ts).
+    return `${sessionCookieSettings(true).name}=${id}`;
   } finally {
     client.close();
   }

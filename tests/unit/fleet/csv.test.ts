@@ -185,6 +185,13 @@ describe("export", () => {
     expect(csv.split("\r\n")[1]).toMatch(/^'=HYPERLINK/);
   });
 
+  it("a name protected on export reads back without its apostrophe; an ordinary apostrophe stays", () => {
+    const names = ["=HYPERLINK(1)", "+1 trailer", "-cold spare", "@home van", "'Tis the shop van"];
+    const csv = exportFleetCsv("accessories", names.map((name) => ({ name, units: "imperial", data: { accessory: { type: "other" } } })));
+    const again = parseFleetCsv(csv, "accessories", "column").rows.map((row) => row.name);
+    expect(again).toEqual(names);
+  });
+
   it("reads 1,000 rows in well under a second", () => {
     const lines = Array.from({ length: 1000 }, (_, i) => `Truck ${i},imperial,9900,6400,4800,6000,18000,9000,900,4,2,10000,1000,20.5,5`);
     const csv = ["name,units,gvwr,curb_weight,gawr_front,gawr_rear,gcwr,tow_max,tongue_max,hitch_class,receiver_opening,hitch_gtw,hitch_tw,receiver_height,pin_to_fascia", ...lines].join("\n");

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { organisationSettingsSchema, safeReturnPath, signInSchema, signUpSchema } from "@/lib/validation/auth";
+import { confirmSignupSchema, newPasswordField, organisationSettingsSchema, safeReturnPath, signInSchema, signUpSchema } from "@/lib/validation/auth";
 import { fieldErrorsFrom } from "@/lib/validation/form-state";
 
 describe("auth input", () => {
@@ -9,20 +9,25 @@ describe("auth input", () => {
   });
 
   it("gives a message per field for a bad sign-up", () => {
-    const result = signUpSchema.safeParse({ name: " ", email: "nope", password: "short", organisationName: "", organisationKind: "castle" });
+    const result = signUpSchema.safeParse({ name: " ", email: "nope", organisationName: "", organisationKind: "castle" });
     expect(result.success).toBe(false);
     const errors = fieldErrorsFrom(result.error!.issues);
-    expect(Object.keys(errors).sort()).toEqual(["email", "name", "organisationKind", "organisationName", "password"]);
-    expect(errors.password).toEqual(["Use at least 10 characters."]);
+    expect(Object.keys(errors).sort()).toEqual(["email", "name", "organisationKind", "organisationName"]);
+  });
+
+  it("sign-up takes no password: it is chosen on the confirmation page, whose schema checks it", () => {
+    expect(Object.keys(signUpSchema.shape)).not.toContain("password");
+    const short = confirmSignupSchema.safeParse({ token: "a-token-of-enough-length", password: "short", confirmPassword: "short" });
+    expect(fieldErrorsFrom(short.error!.issues).password).toEqual(["Use at least 10 characters."]);
   });
 
   it("caps the password length so hashing cannot be used to tie up the server", () => {
-    expect(signUpSchema.shape.password.safeParse("x".repeat(129)).success).toBe(false);
-    expect(signUpSchema.shape.password.safeParse("x".repeat(128)).success).toBe(true);
+    expect(newPasswordField.safeParse("x".repeat(129)).success).toBe(false);
+    expect(newPasswordField.safeParse("x".repeat(128)).success).toBe(true);
   });
 
   it("keeps the tight threshold between 1 % and 50 % and refuses what is not a number", () => {
-    const base = { name: "Quillfield", units: "metric" };
+    const base = { name: "Quillfield", units: "metric", linkLifetimeDays: "180" };
     expect(organisationSettingsSchema.safeParse({ ...base, tightMarginPercent: "10" }).success).toBe(true);
     for (const bad of ["0", "51", "abc", "1e309", "NaN"]) {
       expect(organisationSettingsSchema.safeParse({ ...base, tightMarginPercent: bad }).success, bad).toBe(false);

@@ -6,10 +6,16 @@ import { acceptInvitationAsUser, acceptInvitationWithNewAccount } from "@/lib/se
 import { acceptInvitationSchema } from "@/lib/validation/auth";
 import { invalid, type FormState } from "@/lib/validation/form-state";
 import { switchOrganisation } from "@/lib/server/access";
+import { limitByAddress } from "@/lib/server/auth-limits";
+import { commonPasswordErrors } from "@/lib/server/password-policy";
 
 export async function acceptAsNewMember(_previous: FormState, formData: FormData): Promise<FormState> {
   const parsed = acceptInvitationSchema.safeParse(Object.fromEntries(formData));
   if (!parsed.success) return invalid(parsed.error.issues);
+  const common = commonPasswordErrors(parsed.data.password);
+  if (common) return { ok: false, message: "Some fields need attention.", fieldErrors: common };
+  const refusal = await limitByAddress("new-password");
+  if (refusal) return { ok: false, message: refusal };
   const result = await acceptInvitationWithNewAccount(parsed.data.token, parsed.data.name, parsed.data.password);
   if (!result.ok) return { ok: false, message: result.message };
   await startSession(result.userId, result.organisationId);

@@ -8,6 +8,7 @@ import { Card, CardBody, CardHeader, PageHeader, buttonClasses } from "@/compone
 import { can } from "@/lib/roles";
 import { requirePage } from "@/lib/server/access";
 import { getCheck } from "@/lib/server/checks";
+import { linkLifetimeDays } from "@/lib/server/organisation";
 import { listShareLinks } from "@/lib/server/share-links";
 import { entityId } from "@/lib/validation/checks";
 import { SharePanel } from "./share-panel";
@@ -67,6 +68,7 @@ export default async function SavedCheckPage({ params }: { params: Promise<{ id:
           <SharePanel
             checkId={check.id}
             canShare={can(access.role, "checks.save")}
+            usualDays={await linkLifetimeDays(access)}
             links={links.map((link) => ({
               id: link.id,
               tokenHint: link.tokenHint,

@@ -22,7 +22,7 @@ function linkState(link: ShareLinkRow, now: number) {
   return link.expiresAt ? `Open until ${day.format(new Date(link.expiresAt))}` : "Open, no end date";
 }
 
-export function SharePanel({ checkId, links, canShare, defaultEmail }: { checkId: string; links: ShareLinkRow[]; canShare: boolean; defaultEmail?: string }) {
+export function SharePanel({ checkId, links, canShare, defaultEmail, usualDays }: { checkId: string; links: ShareLinkRow[]; canShare: boolean; defaultEmail?: string; usualDays: number }) {
   const [created, createAction, creating] = useActionState<CreateLinkState, FormData>(createLinkAction, initialFormState);
   const [mailed, mailAction, mailing] = useActionState<FormState, FormData>(emailLinkAction, initialFormState);
   const [revoked, revokeAction, revoking] = useActionState<FormState, FormData>(revokeLinkAction, initialFormState);
@@ -42,12 +42,12 @@ export function SharePanel({ checkId, links, canShare, defaultEmail }: { checkId
         <form action={createAction} className="flex flex-wrap items-end gap-3">
           <input type="hidden" name="checkId" value={checkId} />
           <Field label="Link works for" className="w-56" error={created.fieldErrors?.expiresInDays?.[0]}>
-            <Select name="expiresInDays" defaultValue="30">
+            <Select name="expiresInDays" defaultValue="">
+              <option value="">{`The usual ${usualDays} days`}</option>
               <option value="7">7 days</option>
               <option value="30">30 days</option>
               <option value="90">90 days</option>
               <option value="365">A year</option>
-              <option value="">No end date</option>
             </Select>
           </Field>
           <Button type="submit" loading={creating} icon={<Link2 aria-hidden="true" className="size-4" />}>

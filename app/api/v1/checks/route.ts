@@ -1,12 +1,13 @@
 import { authorize } from "@/lib/server/access";
 import { listChecks, saveCheck } from "@/lib/server/checks";
+import { readJsonBody, refuseForeignOrigin } from "@/lib/server/body";
 import { badRequest, json, refusal } from "@/lib/server/http";
 import { fieldErrorsFrom } from "@/lib/validation/form-state";
 import { listChecksQuerySchema, saveCheckSchema } from "@/lib/validation/checks";
 
 export const dynamic = "force-dynamic";
 
-const MAX_BODY_BYTES = 64 * 1024;
+const LIMIT = { bytes: 64 * 1024, message: "The check must be under 64 KiB of JSON.", field: "form" };
 
 /** The organisation's saved checks: ?vehicle=&customer=&from=&to=&level=&sort=&dir=&page=&pageSize= */
 export async function GET(request: Request) {
@@ -22,19 +23,13 @@ export async function GET(request: Request) {
  * screen's action. The server evaluates the rig itself; 201 with the new id once it is stored.
  */
 export async function POST(request: Request) {
+  const foreign = refuseForeignOrigin(request);
+  if (foreign) return foreign;
   const allowed = await authorize("checks.save");
   if (!allowed.ok) return refusal(allowed);
-  const tooLarge = () => json({ ok: false, error: "too_large", message: "The check must be under 64 KiB of JSON." }, 413);
-  if (Number(request.headers.get("content-length") ?? 0) > MAX_BODY_BYTES) return tooLarge();
-  const text = await request.text();
-  if (text.length > MAX_BODY_BYTES) return tooLarge();
-  let body: unknown;
-  try {
-    body = JSON.parse(text);
-  } catch {
-    return badRequest({ form: ["The body is not valid JSON."] }, "The body is not valid JSON.");
-  }
-  const parsed = saveCheckSchema.safeParse(body);
+  const body = await readJsonBody(request, LIMIT);
+  if (!body.ok) return body.response;
+  const parsed = saveCheckSchema.safeParse(body.value);
   if (!parsed.success) return badRequest(fieldErrorsFrom(parsed.error.issues));
   const { id, result } = await saveCheck(allowed.access, parsed.data);
   // No revalidatePath here: every page is rendered per request (nothing of /checks is cached on the server),

@@ -2,6 +2,7 @@ import { revalidatePath } from "next/cache";
 import { authorize } from "@/lib/server/access";
 import { uploadVehicleDocument } from "@/lib/server/documents";
 import { env } from "@/lib/env";
+import { readMultipartBody, refuseForeignOrigin } from "@/lib/server/body";
 import { badRequest, json, refusal } from "@/lib/server/http";
 import { documentUploadSchema, profileIdSchema } from "@/lib/validation/fleet";
 import { fieldErrorsFrom } from "@/lib/validation/form-state";
@@ -10,18 +11,18 @@ export const dynamic = "force-dynamic";
 
 /** Uploads a label photo or PDF to a vehicle (multipart: vehicleId, kind, file). */
 export async function POST(request: Request) {
+  const foreign = refuseForeignOrigin(request);
+  if (foreign) return foreign;
   const allowed = await authorize("fleet.edit");
   if (!allowed.ok) return refusal(allowed);
-  const declared = Number(request.headers.get("content-length") ?? "0");
-  if (declared > env.UPLOAD_MAX_BYTES + 64 * 1024) {
-    return json({ ok: false, error: "too_large", message: "The file is too large.", fieldErrors: { file: [`Upload at most ${Math.round(env.UPLOAD_MAX_BYTES / 1024 / 1024)} MB.`] } }, 413);
-  }
-  let data: FormData;
-  try {
-    data = await request.formData();
-  } catch {
-    return badRequest({ file: ["Send the file as a form upload (multipart/form-data)."] });
-  }
+  const body = await readMultipartBody(request, {
+    bytes: env.UPLOAD_MAX_BYTES + 64 * 1024,
+    message: "The file is too large.",
+    field: "file",
+    fieldMessage: `Upload at most ${Math.round(env.UPLOAD_MAX_BYTES / 1024 / 1024)} MB.`,
+  });
+  if (!body.ok) return body.response;
+  const data = body.value;
   const vehicleId = profileIdSchema.safeParse(data.get("vehicleId"));
   const kind = documentUploadSchema.safeParse({ kind: data.get("kind") });
   const fieldErrors: Record<string, string[]> = {};

@@ -2,6 +2,7 @@ import { revalidatePath } from "next/cache";
 import { checkCsvBytes, CSV_MAX_BYTES, decodeCsv } from "@/lib/fleet/csv";
 import { authorize } from "@/lib/server/access";
 import { importFleetProfiles } from "@/lib/server/fleet";
+import { readMultipartBody, refuseForeignOrigin } from "@/lib/server/body";
 import { badRequest, json, refusal } from "@/lib/server/http";
 import { importOptionsSchema } from "@/lib/validation/fleet";
 import { fieldErrorsFrom } from "@/lib/validation/form-state";
@@ -13,18 +14,19 @@ export const dynamic = "force-dynamic";
  * valid-rows or all-or-nothing also write, in one transaction. Previewing needs fleet.read, writing fleet.edit.
  */
 export async function POST(request: Request) {
+  const foreign = refuseForeignOrigin(request);
+  if (foreign) return foreign;
   const reader = await authorize("fleet.read");
   if (!reader.ok) return refusal(reader);
-  const declared = Number(request.headers.get("content-length") ?? "0");
-  if (declared > CSV_MAX_BYTES + 64 * 1024) {
-    return json({ ok: false, error: "too_large", message: `A fleet file may be at most ${CSV_MAX_BYTES / 1024 / 1024} MB.`, fieldErrors: { file: ["The file is too large."] } }, 413);
-  }
-  let data: FormData;
-  try {
-    data = await request.formData();
-  } catch {
-    return badRequest({ file: ["Send the file as a form upload (multipart/form-data)."] });
-  }
+  // The file plus room for the form's other fields and boundaries.
+  const body = await readMultipartBody(request, {
+    bytes: CSV_MAX_BYTES + 64 * 1024,
+    message: `A fleet file may be at most ${CSV_MAX_BYTES / 1024 / 1024} MB.`,
+    field: "file",
+    fieldMessage: "The file is too large.",
+  });
+  if (!body.ok) return body.response;
+  const data = body.value;
   const options = importOptionsSchema.safeParse({ kind: data.get("kind"), units: data.get("units"), mode: data.get("mode") });
   if (!options.success) return badRequest(fieldErrorsFrom(options.error.issues));
   if (options.data.mode !== "preview") {
