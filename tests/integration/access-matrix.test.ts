@@ -22,6 +22,7 @@ import * as settingsActions from "@/app/(workspace)/settings/actions";
 import * as teamActions from "@/app/(workspace)/team/actions";
 import * as fleetActions from "@/app/(workspace)/fleet/actions";
 import * as trainingActions from "@/app/(workspace)/training/actions";
+import * as accountActions from "@/app/(workspace)/account/actions";
 import { askForReset } from "@/app/(public)/forgot-password/actions";
 import { acceptAsNewMember, acceptAsSignedIn } from "@/app/(public)/invite/[token]/actions";
 import { chooseNewPassword } from "@/app/(public)/reset-password/[token]/actions";
@@ -98,7 +99,13 @@ interface Entry {
   run: (made: Made) => Promise<unknown>;
 }
 
-const request = (path: string, init?: RequestInit) => new Request(`http://t${path}`, init);
+/** Headers every request of a cell carries besides its own (the cross-site rows set an Origin here). */
+let extraHeaders: Record<string, string> = {};
+const request = (path: string, init?: RequestInit) => {
+  const headers = new Headers(init?.headers);
+  for (const [key, value] of Object.entries(extraHeaders)) headers.set(key, value);
+  return new Request(`http://t${path}`, { ...init, headers });
+};
 const postJson = (path: string, body: unknown) => request(path, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
 const params = <T extends Record<string, string>>(values: T) => ({ params: Promise.resolve(values) });
 const page = (values: Record<string, string> = {}, search: Record<string, string> = {}) => ({ params: Promise.resolve(values), searchParams: Promise.resolve(search) });
@@ -218,8 +225,10 @@ const ENTRIES: Entry[] = [
   // Mail cannot leave in this test (nothing listens): an allowed asker gets past the gate and is told so.
   { name: "action emailLinkAction", rule: "checks.save", scope: "record", prepare: aLink, run: async (m) => linkActions.emailLinkAction(initialFormState, form({ checkId: m.checkId!, token: m.token!, email: "customer@example.com" })) },
   { name: "action signIn", rule: "public", scope: "none", completes: true, run: async () => signIn(initialFormState, form({ email: "ownera@example.com", password: "the matrix passphrase" })) },
-  { name: "action signUp", rule: "public", scope: "none", run: async () => signUp(initialFormState, form({ name: "Matrix Person", email: `signup-${newId().toLowerCase()}@example.com`, password: "a long enough passphrase", organisationName: "Matrix Tow", organisationKind: "shop" })) },
-  { name: "action finishSignup", rule: "public", scope: "none", run: async () => finishSignup(initialFormState, form({ token: "no-such-signup-token-000001" })) },
+  { name: "action signUp", rule: "public", scope: "none", run: async () => signUp(initialFormState, form({ name: "Matrix Person", email: `signup-${newId().toLowerCase()}@example.com`, organisationName: "Matrix Tow", organisationKind: "shop" })) },
+  { name: "action finishSignup", rule: "public", scope: "none", run: async () => finishSignup(initialFormState, form({ token: "no-such-signup-token-000001", password: "a long enough passphrase", confirmPassword: "a long enough passphrase" })) },
+  // The current password is not the asker's: a signed-in person gets past the gate and is told so.
+  { name: "action changePasswordAction", rule: "signed-in", scope: "none", run: async () => accountActions.changePasswordAction(initialFormState, form({ currentPassword: "not the current one", password: "a long enough passphrase", confirmPassword: "a long enough passphrase" })) },
   { name: "action askForReset", rule: "public", scope: "none", run: async () => askForReset(initialFormState, form({ email: "staffa@example.com" })) },
   { name: "action chooseNewPassword", rule: "public", scope: "none", run: async () => chooseNewPassword(initialFormState, form({ token: "no-such-reset-token-000001", password: "a long enough passphrase", confirmPassword: "a long enough passphrase" })) },
   { name: "action acceptAsNewMember", rule: "public", scope: "none", run: async () => acceptAsNewMember(initialFormState, form({ token: "no-such-invitation-token-01", name: "Someone New", password: "a long enough passphrase" })) },
@@ -245,6 +254,7 @@ const ENTRIES: Entry[] = [
 /** The pages, rendered as far as their own gate (vitest cannot render async Server Components inside them). */
 const PAGES: Array<{ path: string; module: string; rule: Rule; scope: Scope; completes?: false; prepare?: () => Promise<Made>; props?: (m: Made) => ReturnType<typeof page> }> = [
   { path: "/overview", module: "@/app/(workspace)/overview/page", rule: "signed-in", scope: "organisation" },
+  { path: "/account", module: "@/app/(workspace)/account/page", rule: "signed-in", scope: "none" },
   { path: "/check", module: "@/app/(workspace)/check/page", rule: "checks.run", scope: "organisation" },
   { path: "/checks", module: "@/app/(workspace)/checks/page", rule: "checks.run", scope: "organisation" },
   { path: "/checks/[id]", module: "@/app/(workspace)/checks/[id]/page", rule: "checks.run", scope: "record", prepare: aCheck, props: (m) => page({ id: m.checkId! }) },
@@ -338,7 +348,7 @@ describe("the access matrix: every route, action and page × anonymous and each 
     const pagePaths = files
       .filter((f) => f.startsWith("app/(workspace)/") && f.endsWith("/page.tsx"))
       .map((f) => `/${f.replace(/^app\/\(workspace\)\//, "").replace(/\/page\.tsx$/, "")}`);
-    const modules = { workspace, checkActions, linkActions, settingsActions, teamActions, fleetActions, trainingActions };
+    const modules = { workspace, checkActions, linkActions, settingsActions, teamActions, fleetActions, trainingActions, accountActions };
     const actionNames = [
       ...Object.values(modules).flatMap((mod) => Object.entries(mod).filter(([, value]) => typeof value === "function").map(([key]) => key)),
       ...["askForReset", "acceptAsNewMember", "acceptAsSignedIn", "chooseNewPassword", "signIn", "signUp", "finishSignup"],
@@ -367,5 +377,41 @@ describe("the access matrix: every route, action and page × anonymous and each 
       }
       expect(problems, problems.join("\n")).toEqual([]);
     });
+  }
+});
+
+/** The custom POST routes: a browser on another site may send them a request, with the person's cookies. */
+const CROSS_SITE = ENTRIES.filter((entry) => entry.name.startsWith("POST /api/"));
+
+describe("the access matrix, sent from another site: every custom POST route × every asker", () => {
+  it("covers every custom POST route", () => {
+    expect(CROSS_SITE.map((entry) => entry.name.split(" ").slice(0, 2).join(" ")).sort()).toEqual(["POST /api/v1/checks", "POST /api/v1/evaluate", "POST /api/v1/fleet/documents", "POST /api/v1/fleet/import"]);
+  });
+
+  for (const [form, headers] of [
+    ["another site's Origin", { origin: "https://evil.example.com" }],
+    ["an opaque Origin (null)", { origin: "null" }],
+    ["Sec-Fetch-Site: cross-site", { "sec-fetch-site": "cross-site" }],
+  ] as const) {
+    for (const entry of CROSS_SITE) {
+      it(`${entry.name} with ${form}: refused for everyone, nothing written`, async () => {
+        const problems: string[] = [];
+        for (const actor of ACTORS) {
+          await actAsActor(actor);
+          const made = entry.prepare ? await entry.prepare() : {};
+          const before = await snapshotAll();
+          extraHeaders = { ...headers };
+          let outcome: Outcome;
+          try {
+            outcome = await classify(() => entry.run(made));
+          } finally {
+            extraHeaders = {};
+          }
+          if (outcome.result !== "refused") problems.push(`${actor.key}: expected a refusal, got ${outcome.result} (${outcome.detail})`);
+          if ((await snapshotAll()) !== before) problems.push(`${actor.key}: something was written`);
+        }
+        expect(problems, problems.join("\n")).toEqual([]);
+      });
+    }
   }
 });
