@@ -1,5 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { firstLink, latestMailTo, navLabels, openBrowser, PHONE, screenshot, signIn } from "./support/browser";
+import { baseURL, firstLink, latestMailTo, navLabels, openBrowser, PHONE, screenshot, signIn } from "./support/browser";
+
+const SESSION_COOKIE = "__Host-towmargin_session";
 
 type Session = Awaited<ReturnType<typeof openBrowser>>;
 
@@ -24,20 +26,19 @@ describe("signing up", () => {
     const { page } = visitor;
     await page.goto("/sign-up");
     await page.getByLabel("E-mail").fill("not-an-address");
-    await page.getByLabel("Password").fill("short");
     await page.getByRole("button", { name: "Create my organisation" }).click();
     await page.getByText("Enter an e-mail address like name@example.com.").waitFor();
     await screenshot(page, "sign-up-errors-desktop");
-    await page.getByText("Use at least 10 characters.").waitFor();
     await page.getByText("Enter your name.").waitFor();
+    // No password on this form: it is chosen on the page the confirmation link opens.
+    await expect.poll(() => page.getByLabel("Password").count()).toBe(0);
   });
 
-  it("mails a confirmation link that creates the organisation with its owner", async () => {
+  it("mails a confirmation link whose page chooses the password and creates the organisation with its owner", async () => {
     const { page } = visitor;
     await page.goto("/sign-up");
     await page.getByLabel("Your name").fill("Odile Fenwright");
     await page.getByLabel("E-mail").fill("odile@larkspur-tow.example.com");
-    await page.getByLabel("Password").fill("a long enough passphrase");
     await page.getByLabel("Shop or fleet name").fill("Larkspur Tow Supply");
     await page.getByRole("button", { name: "Create my organisation" }).click();
     await page.getByText("Check your inbox at odile@larkspur-tow.example.com").waitFor();
@@ -45,7 +46,16 @@ describe("signing up", () => {
     const mail = await latestMailTo("odile@larkspur-tow.example.com");
     expect(mail.subject).toBe("Finish signing up to Towmargin");
     expect(mail.html).toContain("Finish signing up");
-    await page.goto(firstLink(mail.text, "/sign-up/confirm/"));
+    const confirmLink = firstLink(mail.text, "/sign-up/confirm/");
+    await page.goto(confirmLink);
+    await page.getByLabel("Choose a password").fill("password1234");
+    await page.getByLabel("The same again").fill("password1234");
+    await page.getByRole("button", { name: "Finish signing up" }).click();
+    // A common password is refused at its field.
+    await page.getByText("That password is one of the most common ones").waitFor();
+    await page.getByLabel("Choose a password").fill("a long enough passphrase");
+    await page.getByLabel("The same again").fill("a long enough passphrase");
+    await screenshot(page, "sign-up-confirm-desktop");
     await page.getByRole("button", { name: "Finish signing up" }).click();
     await page.waitForURL(/\/overview/);
     await page.getByRole("heading", { level: 1, name: "Hello, Odile Fenwright" }).waitFor();
@@ -59,7 +69,6 @@ describe("signing up", () => {
     await page.goto("/sign-up");
     await page.getByLabel("Your name").fill("Someone Else");
     await page.getByLabel("E-mail").fill(DEMO.staff);
-    await page.getByLabel("Password").fill("another long passphrase");
     await page.getByLabel("Shop or fleet name").fill("Not Quillfield");
     await page.getByRole("button", { name: "Create my organisation" }).click();
     await page.getByText(`Check your inbox at ${DEMO.staff}: we sent a link to finish signing up.`).waitFor();
@@ -127,6 +136,21 @@ describe("signing in with each role", () => {
     }
   });
 
+  it("a way back with a tab between two slashes keeps the person on this site", async () => {
+    const session = await openBrowser();
+    try {
+      const { page } = session;
+      await page.goto(`/sign-in?next=${encodeURIComponent("/\t/evil.example.com/landing")}`);
+      await page.getByLabel("E-mail").fill(DEMO.trainer);
+      await page.getByLabel("Password").fill("towmargin-demo");
+      await page.getByRole("button", { name: "Sign in" }).click();
+      await page.waitForURL(/\/overview/);
+      expect(new URL(page.url()).origin).toBe(new URL(baseURL()).origin);
+    } finally {
+      await session.close();
+    }
+  });
+
   it("sends a signed-out visitor to sign-in and back to the page asked for", async () => {
     const session = await openBrowser();
     try {
@@ -150,14 +174,17 @@ describe("signing out", () => {
     try {
       const { page, context } = session;
       await signIn(page, DEMO.staff);
-      const cookie = (await context.cookies()).find((c) => c.name === "towmargin_session");
+      // The production build names it with the __Host- prefix: Secure, path /, no domain.
+      const cookie = (await context.cookies()).find((c) => c.name === SESSION_COOKIE);
       expect(cookie?.httpOnly).toBe(true);
       expect(cookie?.sameSite).toBe("Lax");
+      expect(cookie?.secure).toBe(true);
+      expect(cookie?.path).toBe("/");
       await page.getByRole("button", { name: "Sign out" }).click();
       await page.waitForURL(/\/sign-in\?signed-out=1/);
 
       // Replaying the old cookie must not work: the session is gone from the database.
-      const replay = await fetch(new URL("/api/v1/me", page.url()), { headers: { cookie: `towmargin_session=${cookie?.value}` } });
+      const replay = await fetch(new URL("/api/v1/me", page.url()), { headers: { cookie: `${SESSION_COOKIE}=${cookie?.value}` } });
       expect(replay.status).toBe(401);
       const response = await page.goto("/overview");
       expect(response?.url()).toContain("/sign-in");
@@ -223,7 +250,7 @@ describe("resetting a password", () => {
       await page.getByLabel("E-mail").fill(DEMO.signedUp);
       await page.getByRole("button", { name: "Send me a link" }).click();
       await page.getByText("If an account uses that address").waitFor();
-      const link = firstLink((await latestMailTo(DEMO.signedUp)).text, "/reset-password/");
+      const link = firstLink((await latestMailTo(DEMO.signedUp, 10_000, "Your Towmargin password")).text, "/reset-password/");
       await page.goto(link);
       await page.getByLabel("New password").fill("odile's new passphrase");
       await page.getByLabel("The same again").fill("odile's new passphrase");
@@ -234,6 +261,37 @@ describe("resetting a password", () => {
       await page.getByRole("heading", { level: 1, name: "This link no longer works" }).waitFor();
     } finally {
       await session.close();
+    }
+  });
+});
+
+describe("changing the password while signed in", () => {
+  it("needs the current password and signs the account out on its other devices", async () => {
+    const here = await openBrowser();
+    const elsewhere = await openBrowser(PHONE);
+    try {
+      await signIn(here.page, DEMO.signedUp, "odile's new passphrase");
+      await signIn(elsewhere.page, DEMO.signedUp, "odile's new passphrase");
+      await here.page.getByRole("link", { name: "Odile Fenwright" }).click();
+      await here.page.getByRole("heading", { level: 1, name: "Your account" }).waitFor();
+      await here.page.getByLabel("Current password").fill("not my password at all");
+      await here.page.getByLabel("New password").fill("odile's third passphrase");
+      await here.page.getByLabel("The new one again").fill("odile's third passphrase");
+      await here.page.getByRole("button", { name: "Change the password" }).click();
+      await here.page.getByText("That is not your current password.").waitFor();
+      await here.page.getByLabel("Current password").fill("odile's new passphrase");
+      await here.page.getByRole("button", { name: "Change the password" }).click();
+      await here.page.getByText("Your new password is set.").waitFor();
+      await screenshot(here.page, "account-desktop");
+      // This browser stays signed in; the other device is signed out.
+      expect((await here.page.goto("/overview"))?.url()).toContain("/overview");
+      expect((await elsewhere.page.goto("/overview"))?.url()).toContain("/sign-in");
+      await signIn(elsewhere.page, DEMO.signedUp, "odile's third passphrase");
+      await elsewhere.page.goto("/account");
+      await screenshot(elsewhere.page, "account-phone");
+    } finally {
+      await here.close();
+      await elsewhere.close();
     }
   });
 });

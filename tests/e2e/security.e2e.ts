@@ -19,12 +19,15 @@ function directives(policy: string): Map<string, string[]> {
   );
 }
 
+/** The production build's session cookie: the __Host- prefix makes the browser insist on Secure, path /, no domain. */
+const SESSION_COOKIE = "__Host-towmargin_session";
+
 async function sessionCookie(session: Session): Promise<string | undefined> {
-  return (await session.context.cookies()).find((cookie) => cookie.name === "towmargin_session")?.value;
+  return (await session.context.cookies()).find((cookie) => cookie.name === SESSION_COOKIE)?.value;
 }
 
 async function meWith(cookie: string): Promise<number> {
-  return (await fetch(`${baseURL()}/api/v1/me`, { headers: { cookie: `towmargin_session=${cookie}` } })).status;
+  return (await fetch(`${baseURL()}/api/v1/me`, { headers: { cookie: `${SESSION_COOKIE}=${cookie}` } })).status;
 }
 
 describe("security headers", () => {
@@ -52,6 +55,15 @@ describe("security headers", () => {
     expect(first.headers.get("referrer-policy")).toBe("strict-origin-when-cross-origin");
     expect(first.headers.get("x-frame-options")).toBe("DENY");
     expect(first.headers.get("x-powered-by")).toBeNull();
+    expect(first.headers.get("strict-transport-security")).toMatch(/^max-age=\d{8,}; includeSubDomains$/);
+  });
+
+  it("custom POST routes refuse a request from another site and a body not declared as JSON", async () => {
+    const body = JSON.stringify(camper);
+    const post = (headers: Record<string, string>) => fetch(`${baseURL()}/api/v1/evaluate`, { method: "POST", headers, body });
+    expect((await post({ "content-type": "application/json", origin: "https://evil.example.com" })).status).toBe(403);
+    expect((await post({ "content-type": "text/plain" })).status).toBe(415);
+    expect((await post({ "content-type": "application/json", origin: new URL(baseURL()).origin })).status).toBe(200);
   });
 
   it("JSON answers may run nothing at all", async () => {
@@ -155,7 +167,10 @@ describe("sessions", () => {
     const session = await openBrowser();
     try {
       const planted = "plantedsessionid0000000000000000";
-      await session.context.addCookies([{ name: "towmargin_session", value: planted, url: baseURL() }]);
+      // Planted from a page of the site itself (a __Host- cookie cannot come from a sibling host or carry a domain).
+      await session.page.goto("/sign-in");
+      await session.page.evaluate(([name, value]) => (document.cookie = `${name}=${value}; Secure; Path=/`), [SESSION_COOKIE, planted] as const);
+      expect(await sessionCookie(session)).toBe(planted);
       await signIn(session.page, "counter2@quillfield.example.com");
       const issued = await sessionCookie(session);
       expect(issued).toBeDefined();
@@ -187,7 +202,8 @@ describe("sessions", () => {
     const session = await openBrowser();
     try {
       const { page } = session;
-      // Its own client address, so that the other browser tests' sign-ins are not counted with these.
+      // A made-up forwarding header changes nothing: with no trusted proxy the connection's address counts
+      // (the browser tests raise the per-address limit, so the per-account limit is what refuses here).
       await session.context.setExtraHTTPHeaders({ "x-forwarded-for": "198.51.100.77" });
       const messages: string[] = [];
       for (let attempt = 1; attempt <= 9; attempt++) {

@@ -55,14 +55,15 @@ export async function navLabels(page: Page): Promise<string[]> {
 }
 
 /** The newest captured message to this address, read from the test database. */
-export async function latestMailTo(address: string, timeoutMs = 10_000): Promise<{ subject: string; text: string; html: string | null }> {
+/** The newest mail to the address (with this subject, when given), waiting for it: some mail leaves after the answer. */
+export async function latestMailTo(address: string, timeoutMs = 10_000, subject?: string): Promise<{ subject: string; text: string; html: string | null }> {
   const client = createClient({ url: inject("databaseUrl") });
   const deadline = Date.now() + timeoutMs;
   try {
     while (Date.now() < deadline) {
       const result = await client.execute({
-        sql: "SELECT subject, text, html FROM captured_mail WHERE envelope_to = ? ORDER BY id DESC LIMIT 1",
-        args: [address],
+        sql: `SELECT subject, text, html FROM captured_mail WHERE envelope_to = ?${subject ? " AND subject = ?" : ""} ORDER BY id DESC LIMIT 1`,
+        args: subject ? [address, subject] : [address],
       });
       const row = result.rows[0];
       if (row) return { subject: String(row.subject), text: String(row.text), html: row.html === null ? null : String(row.html) };
