@@ -28,3 +28,11 @@ export { GENERAL_CAUTIONS } from "./checks/verdict";
 export { TONGUE_BANDS } from "./derive";
 export { KG_PER_LB, MM_PER_IN, type UnitSystem, type UnitString } from "./units";
 export * from "./types";
+export {
+  hitchAllowance,
+  type HitchAllowance,
+  type HitchAllowanceInput,
+  type HitchAllowanceRatings,
+  type AllowanceLimit,
+  type AllowanceRating,
+} from "./hitch-allowance";
