@@ -156,9 +156,18 @@ const profileColumns = () => ({
   updatedAt: timestampNow("updated_at"),
 });
 
-export const vehicleProfiles = sqliteTable("vehicle_profiles", profileColumns(), (table) => [
-  index("vehicle_profiles_org_idx").on(table.organisationId),
-]);
+export const vehicleProfiles = sqliteTable(
+  "vehicle_profiles",
+  {
+    ...profileColumns(),
+    /**
+     * Where figures in `data` came from, by rig path ("hitch.receiverHeight"): the installation record that
+     * measured or read them and its date. A figure typed on the profile form has no entry.
+     */
+    figureSources: text("figure_sources", { mode: "json" }),
+  },
+  (table) => [index("vehicle_profiles_org_idx").on(table.organisationId)],
+);
 export const trailerProfiles = sqliteTable("trailer_profiles", profileColumns(), (table) => [
   index("trailer_profiles_org_idx").on(table.organisationId),
 ]);
@@ -324,3 +333,116 @@ export const practiceAttempts = sqliteTable(
   },
   (table) => [index("practice_attempts_lesson_idx").on(table.lessonId), index("practice_attempts_user_idx").on(table.userId)],
 );
+
+/** The shop's own fitting checklist, defined once and ticked on every installation record. */
+export const installationChecklistItems = sqliteTable(
+  "installation_checklist_items",
+  {
+    id: text("id").primaryKey(),
+    organisationId: text("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    label: text("label").notNull(),
+    /** When set, the installer types a value read from the maker's instruction sheet (a torque, for one). */
+    valueLabel: text("value_label"),
+    position: integer("position").notNull(),
+    archivedAt: integer("archived_at", { mode: "timestamp_ms" }),
+    createdAt: timestampNow(),
+  },
+  (table) => [index("installation_checklist_items_org_idx").on(table.organisationId)],
+);
+
+/**
+ * One hitch installation: the vehicle (a fleet profile, or a customer's vehicle described here), what was
+ * fitted, the measurements taken after fitting, the checklist as ticked, and the hand-over. Figures are in
+ * the record's `units`.
+ */
+export const installationRecords = sqliteTable(
+  "installation_records",
+  {
+    id: text("id").primaryKey(),
+    organisationId: text("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    units: text("units", { enum: ["imperial", "metric"] }).notNull(),
+    vehicleProfileId: text("vehicle_profile_id").references(() => vehicleProfiles.id, { onDelete: "set null" }),
+    /** A customer's vehicle in words ("grey two-door coupe"), when it is not a fleet profile; also kept for a profile's name at the time. */
+    vehicleDescription: text("vehicle_description").notNull(),
+    /** The customer's vehicle's own ratings (tow rating, tongue limit, departure angle…) when not a profile. */
+    vehicle: text("vehicle", { mode: "json" }),
+    customerName: text("customer_name").notNull(),
+    customerEmail: text("customer_email"),
+    installerUserId: text("installer_user_id").references(() => users.id, { onDelete: "set null" }),
+    /** The day of the fitting, YYYY-MM-DD as the shop means it (no time zone). */
+    fittedOn: text("fitted_on").notNull(),
+    state: text("state", { enum: ["planned", "fitted", "handed-over"] }).notNull().default("planned"),
+    hitch: text("hitch", { mode: "json" }).notNull(),
+    parts: text("parts", { mode: "json" }).notNull(),
+    measurements: text("measurements", { mode: "json" }).notNull(),
+    checklist: text("checklist", { mode: "json" }).notNull(),
+    /** A carrier depth the customer asked about, for "what this hitch allows". */
+    carrierDepth: real("carrier_depth"),
+    note: text("note"),
+    /** When the record's figures were written into the vehicle profile. */
+    appliedToProfileAt: integer("applied_to_profile_at", { mode: "timestamp_ms" }),
+    handedOverAt: integer("handed_over_at", { mode: "timestamp_ms" }),
+    /** When the customer confirmed on their page that they have read the limits. */
+    customerConfirmedAt: integer("customer_confirmed_at", { mode: "timestamp_ms" }),
+    createdByUserId: text("created_by_user_id").references(() => users.id, { onDelete: "set null" }),
+    createdAt: timestampNow(),
+    updatedAt: timestampNow("updated_at"),
+  },
+  (table) => [
+    index("installation_records_org_date_idx").on(table.organisationId, table.fittedOn),
+    index("installation_records_vehicle_idx").on(table.vehicleProfileId),
+  ],
+);
+
+/** Photos of the hitch label and the fitted hitch. The bytes live in the document store. */
+export const installationPhotos = sqliteTable(
+  "installation_photos",
+  {
+    id: text("id").primaryKey(),
+    organisationId: text("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    installationRecordId: text("installation_record_id")
+      .notNull()
+      .references(() => installationRecords.id, { onDelete: "cascade" }),
+    kind: text("kind", { enum: ["hitch-label", "fitted-hitch", "other"] }).notNull(),
+    fileName: text("file_name").notNull(),
+    contentType: text("content_type").notNull(),
+    sizeBytes: integer("size_bytes").notNull(),
+    storageKey: text("storage_key").notNull(),
+    uploadedByUserId: text("uploaded_by_user_id").references(() => users.id, { onDelete: "set null" }),
+    createdAt: timestampNow(),
+  },
+  (table) => [index("installation_photos_record_idx").on(table.installationRecordId)],
+);
+
+/**
+ * A customer's link to one installation record's hand-over: the same machinery as `share_links` (a 192-bit
+ * token shown once, only its SHA-256 and last characters kept, withdrawn by setting `revoked_at`).
+ */
+export const installationLinks = sqliteTable(
+  "installation_links",
+  {
+    id: text("id").primaryKey(),
+    organisationId: text("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    installationRecordId: text("installation_record_id")
+      .notNull()
+      .references(() => installationRecords.id, { onDelete: "cascade" }),
+    tokenHash: text("token_hash").notNull().unique(),
+    tokenHint: text("token_hint").notNull(),
+    createdByUserId: text("created_by_user_id").references(() => users.id, { onDelete: "set null" }),
+    expiresAt: integer("expires_at", { mode: "timestamp_ms" }),
+    revokedAt: integer("revoked_at", { mode: "timestamp_ms" }),
+    lastOpenedAt: integer("last_opened_at", { mode: "timestamp_ms" }),
+    createdAt: timestampNow(),
+  },
+  (table) => [index("installation_links_record_idx").on(table.installationRecordId)],
+);
+
+export type InstallationRecordRow = typeof installationRecords.$inferSelect;

@@ -14,6 +14,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: "/check", label: "Check a rig", permission: "checks.run" },
   { href: "/checks", label: "Saved checks", permission: "checks.run" },
   { href: "/fleet", label: "Fleet", permission: "fleet.read" },
+  { href: "/installations", label: "Installations", permission: "installations.read" },
   { href: "/training", label: "Training", permission: "training.practise" },
   { href: "/team", label: "Team", permission: "team.manage" },
   { href: "/settings", label: "Organisation", permission: "organisation.manage" },

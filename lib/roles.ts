@@ -30,6 +30,11 @@ export const PERMISSIONS = {
   "fleet.read": ["owner", "staff", "fleet_manager", "trainer"],
   "fleet.edit": ["owner", "fleet_manager"],
   "training.author": ["owner", "trainer"],
+  /** Installation records: everyone reads (a fleet manager only the fleet's own vehicles'); the counter and the owner write. */
+  "installations.read": ["owner", "staff", "fleet_manager", "trainer"],
+  "installations.edit": ["owner", "staff"],
+  /** The shop's fitting checklist, defined once. */
+  "installations.checklist": ["owner"],
   "training.practise": ["owner", "staff", "fleet_manager", "trainer"],
 } as const satisfies Record<string, readonly Role[]>;
 

@@ -126,6 +126,7 @@ export function PairingMatrix({ initial, initialKey, initialFilters, cautions }:
                     <Link href={`/fleet/vehicles/${row.id}`} className="underline decoration-rule">
                       {row.name}
                     </Link>
+                    {row.measuredOn ? <span className="block text-xs font-normal text-ink-soft">hitch measured {row.measuredOn}</span> : null}
                   </th>
                   {row.cells.map((cell, i) => (
                     <td key={data.columns[i]!.id} className={cn("relative px-1 py-1", !cell && "bg-sunken/40")}>

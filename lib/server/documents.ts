@@ -56,10 +56,27 @@ export async function listVehicleDocuments(access: AccessContext, vehicleProfile
 export type UploadResult = { ok: true; document: VehicleDocument } | { ok: false; status: 400 | 404 | 413; field: string; message: string };
 
 /** A file name safe to show and to send back in Content-Disposition: no path, no control characters. */
-function cleanFileName(name: string, extension: string): string {
+export function cleanFileName(name: string, extension: string): string {
   const base = name.split(/[\\/]/).pop() ?? "";
   const cleaned = base.replace(/[\u0000-\u001f\u007f"]/g, "").trim().slice(0, 120);
   return cleaned || `document.${extension}`;
+}
+
+/**
+ * What every stored document passes: not empty, at most UPLOAD_MAX_BYTES, and a photo or PDF by its bytes
+ * (magic numbers), never by its name or the browser's claim. Used for vehicle labels and installation photos.
+ */
+export async function checkDocumentBytes(file: { bytes: Uint8Array }): Promise<{ ok: true; mime: string; extension: string } | { ok: false; status: 400 | 413; field: string; message: string }> {
+  if (file.bytes.byteLength === 0) return { ok: false, status: 400, field: "file", message: "The file is empty." };
+  if (file.bytes.byteLength > env.UPLOAD_MAX_BYTES) {
+    return { ok: false, status: 413, field: "file", message: `The file is larger than ${Math.round(env.UPLOAD_MAX_BYTES / 1024 / 1024)} MB. Take a smaller photo or scan.` };
+  }
+  const detected = await fileTypeFromBuffer(file.bytes);
+  const extension = detected ? DOCUMENT_TYPES[detected.mime] : undefined;
+  if (!detected || !extension) {
+    return { ok: false, status: 400, field: "file", message: "Upload a photo (JPEG, PNG, WebP, HEIC) or a PDF. This file is neither, whatever its name says." };
+  }
+  return { ok: true, mime: detected.mime, extension };
 }
 
 /**
@@ -81,25 +98,19 @@ export async function uploadVehicleDocument(
     .where(and(eq(vehicleProfiles.id, vehicleProfileId), eq(vehicleProfiles.organisationId, organisationId)))
     .get();
   if (!vehicle) return { ok: false, status: 404, field: "vehicle", message: "No such vehicle in this organisation." };
-  if (file.bytes.byteLength === 0) return { ok: false, status: 400, field: "file", message: "The file is empty." };
-  if (file.bytes.byteLength > env.UPLOAD_MAX_BYTES) {
-    return { ok: false, status: 413, field: "file", message: `The file is larger than ${Math.round(env.UPLOAD_MAX_BYTES / 1024 / 1024)} MB. Take a smaller photo or scan.` };
-  }
-  const detected = await fileTypeFromBuffer(file.bytes);
-  const extension = detected ? DOCUMENT_TYPES[detected.mime] : undefined;
-  if (!detected || !extension) {
-    return { ok: false, status: 400, field: "file", message: "Upload a photo (JPEG, PNG, WebP, HEIC) or a PDF. This file is neither, whatever its name says." };
-  }
+  const checked = await checkDocumentBytes(file);
+  if (!checked.ok) return checked;
+  const { mime, extension } = checked;
   const id = newId();
   const storageKey = `${organisationId.replace(/[^A-Za-z0-9_-]/g, "_")}/${id}.${extension}`;
-  await documentStore().put(storageKey, file.bytes, detected.mime);
+  await documentStore().put(storageKey, file.bytes, mime);
   const document = {
     id,
     organisationId,
     vehicleProfileId,
     kind,
     fileName: cleanFileName(file.name, extension),
-    contentType: detected.mime,
+    contentType: mime,
     sizeBytes: file.bytes.byteLength,
     storageKey,
     uploadedByUserId: access.user.id,

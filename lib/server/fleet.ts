@@ -11,6 +11,7 @@ import type { Governing, Margin, VerdictLevel } from "@/lib/towing/types";
 import type { UnitSystem } from "@/lib/towing/units";
 import type { ImportOptions, MatrixQuery, ProfileInput } from "@/lib/validation/fleet";
 import type { AccessContext } from "./access";
+import { figureSourcesByVehicle } from "./installations";
 import { AccessDenied } from "./team";
 import { newId } from "./tokens";
 
@@ -215,7 +216,8 @@ export interface MatrixColumn {
 
 export interface MatrixPage {
   units: UnitSystem;
-  rows: Array<{ id: string; name: string; cells: Array<MatrixCell | null> }>;
+  /** `measuredOn`: the date of the installation record the vehicle's hitch figures were measured by, if any. */
+  rows: Array<{ id: string; name: string; measuredOn?: string; cells: Array<MatrixCell | null> }>;
   columns: MatrixColumn[];
   page: number;
   pageCount: number;
@@ -383,6 +385,11 @@ export async function fleetMatrix(access: AccessContext, query: MatrixQuery): Pr
       return query.level && cell.level !== query.level ? null : cell;
     }),
   }));
+  const sources = await figureSourcesByVehicle(access, rows.map((row) => row.id));
+  for (const row of rows) {
+    const dates = Object.values(sources[row.id] ?? {}).filter((source) => source.kind === "measured").map((source) => source.fittedOn).sort();
+    if (dates.length) Object.assign(row, { measuredOn: dates.at(-1) });
+  }
   return {
     units,
     rows,

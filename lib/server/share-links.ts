@@ -1,7 +1,7 @@
 import "server-only";
 import { and, desc, eq, gt, isNull, or } from "drizzle-orm";
 import { getDb } from "@/db/client";
-import { organisations, savedChecks, shareLinks } from "@/db/schema";
+import { installationLinks, installationRecords, organisations, savedChecks, shareLinks } from "@/db/schema";
 import { can } from "@/lib/roles";
 import type { RigInput } from "@/lib/towing/input";
 import type { RigResult } from "@/lib/towing/types";
@@ -152,4 +152,91 @@ export async function resolveShareToken(token: string): Promise<ResolvedShare> {
   if (row.expiresAt && row.expiresAt.getTime() <= Date.now()) return { status: "gone", reason: "expired" };
   await db.update(shareLinks).set({ lastOpenedAt: new Date() }).where(eq(shareLinks.id, row.linkId));
   return { status: "ok", shopName: row.shopName, createdAt: row.createdAt, customerName: row.customerName, rig: row.rig as RigInput, result: row.result as RigResult };
+}
+
+// ------------------------------------------------------------------------------ installation hand-overs
+
+/**
+ * The same machinery for an installation record's hand-over: a 192-bit token shown once, its SHA-256 and
+ * last four characters kept, withdrawn by `revokedAt`, opened at `/r/<token>` with no session.
+ */
+export async function createInstallationLink(access: AccessContext, recordId: string, expiresInDays?: number) {
+  if (!can(access.role, "installations.edit")) throw new AccessDenied("installations.edit");
+  const db = await getDb();
+  const record = await db
+    .select({ id: installationRecords.id })
+    .from(installationRecords)
+    .where(and(eq(installationRecords.id, recordId), eq(installationRecords.organisationId, access.organisation.id)))
+    .get();
+  if (!record) return null;
+  const token = newShareToken();
+  const expiresAt = expiresInDays ? new Date(Date.now() + expiresInDays * 86_400_000) : null;
+  const id = newId();
+  await db.insert(installationLinks).values({
+    id,
+    organisationId: access.organisation.id,
+    installationRecordId: recordId,
+    tokenHash: hashToken(token),
+    tokenHint: token.slice(-4),
+    createdByUserId: access.user.id,
+    expiresAt,
+  });
+  return { id, token, url: shareUrl(token), expiresAt };
+}
+
+export async function listInstallationLinks(access: AccessContext, recordId: string) {
+  if (!can(access.role, "installations.read")) throw new AccessDenied("installations.read");
+  const db = await getDb();
+  return db
+    .select({
+      id: installationLinks.id,
+      tokenHint: installationLinks.tokenHint,
+      createdAt: installationLinks.createdAt,
+      expiresAt: installationLinks.expiresAt,
+      revokedAt: installationLinks.revokedAt,
+      lastOpenedAt: installationLinks.lastOpenedAt,
+    })
+    .from(installationLinks)
+    .where(and(eq(installationLinks.installationRecordId, recordId), eq(installationLinks.organisationId, access.organisation.id)))
+    .orderBy(desc(installationLinks.createdAt));
+}
+
+/** Withdraws a hand-over link; returns the record it belonged to, or undefined when there was no open link. */
+export async function revokeInstallationLink(access: AccessContext, linkId: string): Promise<string | undefined> {
+  if (!can(access.role, "installations.edit")) throw new AccessDenied("installations.edit");
+  const db = await getDb();
+  const [revoked] = await db
+    .update(installationLinks)
+    .set({ revokedAt: new Date() })
+    .where(and(eq(installationLinks.id, linkId), eq(installationLinks.organisationId, access.organisation.id), isNull(installationLinks.revokedAt)))
+    .returning({ recordId: installationLinks.installationRecordId });
+  return revoked?.recordId;
+}
+
+export type ResolvedInstallationLink =
+  | { status: "ok"; linkId: string; organisationId: string; recordId: string; shopName: string }
+  | { status: "gone"; reason: "revoked" | "expired" | "not-found" };
+
+/** What a hand-over link opens, with no session: the record's id and the shop's name. Withdrawn or expired: nothing. */
+export async function resolveInstallationToken(token: string, options: { touch?: boolean } = {}): Promise<ResolvedInstallationLink> {
+  if (!/^[A-Za-z0-9_-]{20,100}$/.test(token)) return { status: "gone", reason: "not-found" };
+  const db = await getDb();
+  const row = await db
+    .select({
+      linkId: installationLinks.id,
+      organisationId: installationLinks.organisationId,
+      recordId: installationLinks.installationRecordId,
+      expiresAt: installationLinks.expiresAt,
+      revokedAt: installationLinks.revokedAt,
+      shopName: organisations.name,
+    })
+    .from(installationLinks)
+    .innerJoin(organisations, eq(installationLinks.organisationId, organisations.id))
+    .where(eq(installationLinks.tokenHash, hashToken(token)))
+    .get();
+  if (!row) return { status: "gone", reason: "not-found" };
+  if (row.revokedAt) return { status: "gone", reason: "revoked" };
+  if (row.expiresAt && row.expiresAt.getTime() <= Date.now()) return { status: "gone", reason: "expired" };
+  if (options.touch !== false) await db.update(installationLinks).set({ lastOpenedAt: new Date() }).where(eq(installationLinks.id, row.linkId));
+  return { status: "ok", linkId: row.linkId, organisationId: row.organisationId, recordId: row.recordId, shopName: row.shopName };
 }

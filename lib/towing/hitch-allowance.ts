@@ -19,8 +19,8 @@
  */
 import { LOW_RECEIVER_IN } from "./checks/accessory-fit";
 import { GENERAL_CAUTIONS } from "./checks/verdict";
-import type { Quantity, Step, UnitString } from "./types";
-import { MM_PER_IN, type UnitSystem } from "./units";
+import type { Quantity, Step } from "./types";
+import { MM_PER_IN, type UnitString, type UnitSystem } from "./units";
 
 export interface HitchAllowanceRatings {
   gtwRating?: number;

@@ -23,6 +23,7 @@ import * as teamActions from "@/app/(workspace)/team/actions";
 import * as fleetActions from "@/app/(workspace)/fleet/actions";
 import * as trainingActions from "@/app/(workspace)/training/actions";
 import * as accountActions from "@/app/(workspace)/account/actions";
+import * as installationActions from "@/app/(workspace)/installations/actions";
 import { askForReset } from "@/app/(public)/forgot-password/actions";
 import { acceptAsNewMember, acceptAsSignedIn } from "@/app/(public)/invite/[token]/actions";
 import { chooseNewPassword } from "@/app/(public)/reset-password/[token]/actions";
@@ -39,7 +40,11 @@ import * as fleetDocumentRoute from "@/app/api/v1/fleet/documents/[id]/route";
 import * as fleetDocumentsRoute from "@/app/api/v1/fleet/documents/route";
 import * as fleetImportRoute from "@/app/api/v1/fleet/import/route";
 import * as fleetMatrixRoute from "@/app/api/v1/fleet/matrix/route";
+import * as handoverConfirmRoute from "@/app/api/v1/handover/confirm/route";
 import * as healthRoute from "@/app/api/v1/health/route";
+import * as installationPhotoRoute from "@/app/api/v1/installations/photos/[id]/route";
+import * as installationPhotosRoute from "@/app/api/v1/installations/photos/route";
+import * as installationsRoute from "@/app/api/v1/installations/route";
 import * as meRoute from "@/app/api/v1/me/route";
 import * as teamRoute from "@/app/api/v1/team/route";
 import * as lessonRoute from "@/app/api/v1/training/lessons/[id]/route";
@@ -47,7 +52,10 @@ import * as lessonsRoute from "@/app/api/v1/training/lessons/route";
 import * as libraryRoute from "@/app/api/v1/training/library/route";
 import * as resultsRoute from "@/app/api/v1/training/results/route";
 import { getDb } from "@/db/client";
-import { invitations, memberships, users, vehicleDocuments, vehicleProfiles } from "@/db/schema";
+import { installationPhotos, invitations, memberships, users, vehicleDocuments, vehicleProfiles } from "@/db/schema";
+import { getAccess } from "@/lib/server/access";
+import { addChecklistItem, saveInstallation } from "@/lib/server/installations";
+import { createInstallationLink } from "@/lib/server/share-links";
 import { hashPassword } from "@/lib/auth/password-hash";
 import { saveCheck } from "@/lib/server/checks";
 import { createShareLink } from "@/lib/server/share-links";
@@ -164,6 +172,45 @@ async function aCourse(): Promise<Made> {
   return { lessonId: lessonId!, courseId: await createCourse(OWNER_OF_A, { title: "Matrix course", description: "" }) };
 }
 
+/** A fitted record of A on one of A's fleet vehicles (so a fleet manager of A may read it). */
+async function aRecord(): Promise<Made> {
+  const { vehicleId } = await aVehicle();
+  const saved = await saveInstallation(OWNER_OF_A, {
+    units: "imperial",
+    vehicleProfileId: vehicleId,
+    customerName: "Matrix Customer",
+    installerUserId: PEOPLE.staffA.id,
+    fittedOn: "2026-11-30",
+    state: "fitted",
+    hitch: { class: 3, gtwRating: 5000, twRating: 500 },
+    parts: [],
+    measurements: { receiverHeight: { value: 18 } },
+    checklist: [],
+  } as never);
+  if (!saved.ok) throw new Error(saved.message);
+  return { recordId: saved.id, vehicleId: vehicleId! };
+}
+async function aRecordLink(): Promise<Made> {
+  const made = await aRecord();
+  const link = (await createInstallationLink(OWNER_OF_A, made.recordId!))!;
+  return { ...made, linkId: link.id, token: link.token };
+}
+async function aChecklistItem(): Promise<Made> {
+  return { itemId: await addChecklistItem(OWNER_OF_A, { label: "Matrix item" }) };
+}
+async function aPhoto(): Promise<Made> {
+  const made = await aRecord();
+  const db = await getDb();
+  const id = newId();
+  await db.insert(installationPhotos).values({ id, organisationId: ORG_A, installationRecordId: made.recordId!, kind: "hitch-label", fileName: "label.png", contentType: "image/png", sizeBytes: 10, storageKey: `matrix/${id}` });
+  return { ...made, photoId: id };
+}
+/** A whole record for the asker's own organisation: the asker installs it on a vehicle described in words. */
+async function ownRecordInput() {
+  const me = (await getAccess())?.user.id ?? PEOPLE.ownerA.id;
+  return { units: "imperial", vehicleDescription: "Matrix hatchback", customerName: "Matrix Customer", installerUserId: me, fittedOn: "2026-11-30", state: "planned", hitch: {}, parts: [], measurements: {}, checklist: [] };
+}
+
 const ENTRIES: Entry[] = [
   // JSON routes
   { name: "GET /api/v1/health", rule: "public", scope: "none", completes: true, run: async () => healthRoute.GET() },
@@ -210,6 +257,33 @@ const ENTRIES: Entry[] = [
   { name: "GET /api/v1/training/library", rule: "training.practise", scope: "none", completes: true, run: async () => libraryRoute.GET() },
   { name: "GET /api/v1/training/results", rule: "training.author", scope: "organisation", completes: true, run: async () => resultsRoute.GET(request("/api/v1/training/results")) },
 
+  { name: "GET /api/v1/installations", rule: "installations.read", scope: "organisation", completes: true, run: async () => installationsRoute.GET(request("/api/v1/installations?state=fitted")) },
+  {
+    name: "POST /api/v1/installations/photos",
+    rule: "installations.edit",
+    scope: "record",
+    completes: true,
+    prepare: aRecord,
+    run: async (m) => {
+      const data = new FormData();
+      data.set("recordId", m.recordId!);
+      data.set("kind", "hitch-label");
+      data.set("file", new File([new Uint8Array([0x25, 0x50, 0x44, 0x46, 0x2d, 0x31, 0x2e, 0x34, 0x0a])], "label.pdf", { type: "application/pdf" }));
+      return installationPhotosRoute.POST(request("/api/v1/installations/photos", { method: "POST", body: data }));
+    },
+  },
+  // The row points at no stored bytes: an allowed asker gets past the gate to "not found".
+  { name: "GET /api/v1/installations/photos/[id]", rule: "installations.read", scope: "record", prepare: aPhoto, run: async (m) => installationPhotoRoute.GET(request("/"), params({ id: m.photoId! })) },
+  // The customer's confirmation: no account, the link's token is the permission.
+  {
+    name: "POST /api/v1/handover/confirm",
+    rule: "public",
+    scope: "none",
+    completes: true,
+    prepare: aRecordLink,
+    run: async (m) => handoverConfirmRoute.POST(request("/api/v1/handover/confirm", { method: "POST", headers: { origin: "http://t", "content-type": "application/json" }, body: JSON.stringify({ token: m.token, confirm: "yes" }) })),
+  },
+
   // Server actions
   { name: "action signOut", rule: "public", scope: "none", completes: true, run: signOutLeavesNoSession },
   { name: "action switchTo (into A)", rule: "signed-in", scope: "record", completes: true, quiet: true, run: switchIntoA },
@@ -249,6 +323,11 @@ const ENTRIES: Entry[] = [
   { name: "action training removeCourseLessonAction", rule: "training.author", scope: "record", prepare: aCourse, run: async (m) => trainingActions.removeCourseLessonAction(initialFormState, form({ courseId: m.courseId!, lessonId: m.lessonId! })) },
   { name: "action training moveCourseLessonAction", rule: "training.author", scope: "record", prepare: aCourse, run: async (m) => trainingActions.moveCourseLessonAction(initialFormState, form({ courseId: m.courseId!, lessonId: m.lessonId!, direction: "up" })) },
   { name: "action training submitAttemptAction", rule: "training.practise", scope: "record", prepare: aLesson, run: async (m) => trainingActions.submitAttemptAction({ lessonId: m.lessonId!, answers: {} }) },
+  { name: "action installations saveInstallationAction", rule: "installations.edit", scope: "organisation", completes: true, run: async () => installationActions.saveInstallationAction(await ownRecordInput()) },
+  { name: "action installations handOverAction", rule: "installations.edit", scope: "record", completes: true, prepare: aRecord, run: async (m) => installationActions.handOverAction(initialFormState, form({ recordId: m.recordId! })) },
+  { name: "action installations revokeInstallationLinkAction", rule: "installations.edit", scope: "record", completes: true, prepare: aRecordLink, run: async (m) => installationActions.revokeInstallationLinkAction(initialFormState, form({ linkId: m.linkId! })) },
+  { name: "action installations addChecklistItemAction", rule: "installations.checklist", scope: "organisation", completes: true, run: async () => installationActions.addChecklistItemAction(initialFormState, form({ label: "Matrix checklist item", valueLabel: "" })) },
+  { name: "action installations removeChecklistItemAction", rule: "installations.checklist", scope: "record", completes: true, prepare: aChecklistItem, run: async (m) => installationActions.removeChecklistItemAction(initialFormState, form({ itemId: m.itemId! })) },
 ];
 
 /** The pages, rendered as far as their own gate (vitest cannot render async Server Components inside them). */
@@ -270,6 +349,11 @@ const PAGES: Array<{ path: string; module: string; rule: Rule; scope: Scope; com
   { path: "/fleet/[kind]/new", module: "@/app/(workspace)/fleet/[kind]/new/page", rule: "fleet.edit", scope: "organisation", props: () => page({ kind: "vehicles" }) },
   { path: "/fleet/[kind]/[id]", module: "@/app/(workspace)/fleet/[kind]/[id]/page", rule: "fleet.read", scope: "record", prepare: aVehicle, props: (m) => page({ kind: "vehicles", id: m.vehicleId! }) },
   { path: "/fleet/[kind]/[id]/edit", module: "@/app/(workspace)/fleet/[kind]/[id]/edit/page", rule: "fleet.edit", scope: "record", prepare: aVehicle, props: (m) => page({ kind: "vehicles", id: m.vehicleId! }) },
+  { path: "/installations", module: "@/app/(workspace)/installations/page", rule: "installations.read", scope: "organisation" },
+  { path: "/installations/new", module: "@/app/(workspace)/installations/new/page", rule: "installations.edit", scope: "organisation" },
+  { path: "/installations/checklist", module: "@/app/(workspace)/installations/checklist/page", rule: "installations.read", scope: "organisation" },
+  { path: "/installations/[id]", module: "@/app/(workspace)/installations/[id]/page", rule: "installations.read", scope: "record", prepare: aRecord, props: (m) => page({ id: m.recordId! }) },
+  { path: "/installations/[id]/edit", module: "@/app/(workspace)/installations/[id]/edit/page", rule: "installations.edit", scope: "record", prepare: aRecord, props: (m) => page({ id: m.recordId! }) },
   { path: "/training", module: "@/app/(workspace)/training/page", rule: "training.practise", scope: "organisation" },
   { path: "/training/library", module: "@/app/(workspace)/training/library/page", rule: "training.practise", scope: "none" },
   { path: "/training/results", module: "@/app/(workspace)/training/results/page", rule: "training.author", scope: "organisation" },
@@ -348,7 +432,7 @@ describe("the access matrix: every route, action and page × anonymous and each 
     const pagePaths = files
       .filter((f) => f.startsWith("app/(workspace)/") && f.endsWith("/page.tsx"))
       .map((f) => `/${f.replace(/^app\/\(workspace\)\//, "").replace(/\/page\.tsx$/, "")}`);
-    const modules = { workspace, checkActions, linkActions, settingsActions, teamActions, fleetActions, trainingActions, accountActions };
+    const modules = { workspace, checkActions, linkActions, settingsActions, teamActions, fleetActions, trainingActions, accountActions, installationActions };
     const actionNames = [
       ...Object.values(modules).flatMap((mod) => Object.entries(mod).filter(([, value]) => typeof value === "function").map(([key]) => key)),
       ...["askForReset", "acceptAsNewMember", "acceptAsSignedIn", "chooseNewPassword", "signIn", "signUp", "finishSignup"],

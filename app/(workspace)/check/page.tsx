@@ -1,10 +1,12 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { CheckWorkbench } from "@/components/check/check-workbench";
 import { PageHeader } from "@/components/ui";
 import { can } from "@/lib/roles";
 import { requirePage } from "@/lib/server/access";
 import { getCheck } from "@/lib/server/checks";
 import { rigFromProfiles } from "@/lib/server/fleet";
+import { figureSourcesOf } from "@/lib/server/installations";
 import { listProfilesForCheck } from "@/lib/server/profiles";
 import { entityId } from "@/lib/validation/checks";
 import { saveCheckAction, saveVehicleProfileAction } from "./actions";
@@ -22,6 +24,9 @@ export default async function CheckPage({ searchParams }: { searchParams: Promis
   const paired = source ? undefined : await rigFromProfiles(access, { vehicle: pick(params.vehicle), trailer: pick(params.trailer), accessory: pick(params.accessory) });
   const initialRig = source?.rig ?? paired;
   const profiles = await listProfilesForCheck(access);
+  const vehicleId = paired ? pick(params.vehicle) : undefined;
+  const sources = vehicleId ? Object.entries(await figureSourcesOf(access, vehicleId)).filter(([, source]) => source.kind === "measured") : [];
+  const MEASURED_WORDS: Record<string, string> = { "hitch.receiverHeight": "receiver height", "hitch.pinToFascia": "pin hole to fascia", "vehicle.rearAxleToHitch": "rear axle to pin hole" };
   return (
     <div className="flex flex-col gap-6">
       <PageHeader
@@ -34,6 +39,15 @@ export default async function CheckPage({ searchParams }: { searchParams: Promis
               : "Vehicle, hitch and what is hitched: the verdict follows every figure you type."
         }
       />
+      {sources.length ? (
+        <p className="text-sm text-ink-soft" data-testid="measured-figures">
+          Measured after fitting, from the installation record of {sources[0]![1].fittedOn}:{" "}
+          {sources.map(([path]) => MEASURED_WORDS[path] ?? path).join(", ")}.{" "}
+          <Link href={`/installations/${sources[0]![1].recordId}`} className="text-accent-strong underline">
+            Open the record
+          </Link>
+        </p>
+      ) : null}
       <CheckWorkbench
         key={source?.id ?? (paired ? JSON.stringify([params.vehicle, params.trailer, params.accessory]) : "new")}
         initialRig={initialRig}

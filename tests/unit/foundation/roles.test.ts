@@ -20,9 +20,16 @@ describe("roles", () => {
     expect(can("fleet_manager", "training.author")).toBe(false);
   });
 
+  it("installation records: the counter and the owner write, everyone reads, the owner keeps the checklist", () => {
+    expect(["owner", "staff"].every((r) => can(r as never, "installations.edit"))).toBe(true);
+    expect(can("fleet_manager", "installations.edit") || can("trainer", "installations.edit")).toBe(false);
+    expect(["owner", "staff", "fleet_manager", "trainer"].every((r) => can(r as never, "installations.read"))).toBe(true);
+    expect(can("staff", "installations.checklist")).toBe(false);
+  });
+
   it("navigation follows the permissions, and the mailbox only where it is switched on", () => {
-    expect(navigationFor("owner", { mailbox: true }).map((i) => i.href)).toEqual(["/overview", "/check", "/checks", "/fleet", "/training", "/team", "/settings", "/mailbox"]);
-    expect(navigationFor("owner", { mailbox: false }).map((i) => i.href)).toEqual(["/overview", "/check", "/checks", "/fleet", "/training", "/team", "/settings"]);
-    expect(navigationFor("staff", { mailbox: true }).map((i) => i.href)).toEqual(["/overview", "/check", "/checks", "/fleet", "/training"]);
+    expect(navigationFor("owner", { mailbox: true }).map((i) => i.href)).toEqual(["/overview", "/check", "/checks", "/fleet", "/installations", "/training", "/team", "/settings", "/mailbox"]);
+    expect(navigationFor("owner", { mailbox: false }).map((i) => i.href)).toEqual(["/overview", "/check", "/checks", "/fleet", "/installations", "/training", "/team", "/settings"]);
+    expect(navigationFor("staff", { mailbox: true }).map((i) => i.href)).toEqual(["/overview", "/check", "/checks", "/fleet", "/installations", "/training"]);
   });
 });

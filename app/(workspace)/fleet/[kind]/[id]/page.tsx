@@ -9,6 +9,8 @@ import { can } from "@/lib/roles";
 import { requirePage } from "@/lib/server/access";
 import { listVehicleDocuments } from "@/lib/server/documents";
 import { getFleetProfile, savedChecksOfVehicle } from "@/lib/server/fleet";
+import { figureSourcesOf, installationsOfVehicle, type FigureSources } from "@/lib/server/installations";
+import { StateBadge } from "@/components/installations/state-badge";
 import { profileIdSchema } from "@/lib/validation/fleet";
 import { deleteDocumentAction } from "../../actions";
 
@@ -27,6 +29,8 @@ export default async function ProfilePage({ params }: { params: Promise<{ kind: 
   const groups = [...new Set(fields.map((field) => field.group))];
   const [documents, checks] =
     kind === "vehicles" ? await Promise.all([listVehicleDocuments(access, profile.id), savedChecksOfVehicle(access, profile)]) : [[], []];
+  const [sources, installations]: [FigureSources, Awaited<ReturnType<typeof installationsOfVehicle>>] =
+    kind === "vehicles" ? await Promise.all([figureSourcesOf(access, profile.id), can(access.role, "installations.read") ? installationsOfVehicle(access, profile.id) : []]) : [{}, []];
   const matrixFilter = kind === "vehicles" ? `vehicle=${encodeURIComponent(profile.name)}` : `hitched=${encodeURIComponent(profile.name)}`;
 
   return (
@@ -61,7 +65,14 @@ export default async function ProfilePage({ params }: { params: Promise<{ kind: 
                     const unit = unitFor(field, profile.units);
                     return (
                       <div key={field.path} className="contents">
-                        <dt className="text-ink-soft">{field.label}</dt>
+                        <dt className="text-ink-soft">
+                          {field.label}
+                          {sources[field.path] ? (
+                            <Link href={`/installations/${sources[field.path]!.recordId}`} className="block text-xs text-accent-strong underline" data-testid={`source-${field.path}`}>
+                              {sources[field.path]!.kind === "measured" ? "Measured" : "From the hitch label"} {sources[field.path]!.fittedOn}, installation record
+                            </Link>
+                          ) : null}
+                        </dt>
                         <dd className="num text-right">
                           {value === undefined || value === null ? (
                             <span className="text-ink-faint">not known</span>
@@ -85,6 +96,37 @@ export default async function ProfilePage({ params }: { params: Promise<{ kind: 
       </div>
       {kind === "vehicles" ? (
         <>
+          <Card as="section" aria-labelledby="vehicle-installations">
+            <CardHeader
+              titleId="vehicle-installations"
+              title="Installation records"
+              description="Hitches fitted to this vehicle. A fitted record gives the profile its hitch and measured figures, marked above with the record they came from."
+              actions={
+                can(access.role, "installations.edit") ? (
+                  <Link href={`/installations/new?vehicle=${profile.id}`} className={buttonClasses({ variant: "secondary", size: "sm" })}>
+                    Record an installation
+                  </Link>
+                ) : undefined
+              }
+            />
+            <CardBody>
+              {installations.length === 0 ? (
+                <p className="text-sm text-ink-soft">No installation records yet.</p>
+              ) : (
+                <ul className="divide-y divide-rule">
+                  {installations.map((row) => (
+                    <li key={row.id} className="flex flex-wrap items-center justify-between gap-2 py-2 text-sm">
+                      <Link href={`/installations/${row.id}`} className="text-accent-strong underline">
+                        {row.fittedOn} · {row.customerName}
+                        {row.installerName ? ` · ${row.installerName}` : ""}
+                      </Link>
+                      <StateBadge state={row.state} />
+                    </li>
+                  ))}
+                </ul>
+              )}
+            </CardBody>
+          </Card>
           <DocumentsPanel vehicleId={profile.id} documents={documents} canEdit={canEdit} deleteAction={deleteDocumentAction} />
           <Card as="section" aria-labelledby="vehicle-checks">
             <CardHeader titleId="vehicle-checks" title="Saved checks with this vehicle" description="Checks saved under this vehicle's name or with exactly its figures." />
