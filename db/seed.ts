@@ -7,6 +7,7 @@ import { evaluateRig } from "../lib/towing";
 import type { RigInput } from "../lib/towing/input";
 import { DEMO_ACCESSORIES, DEMO_CHECKS, DEMO_TRAILERS, DEMO_VEHICLES } from "./demo-rigs";
 import { seedDemoFleet } from "./demo-fleet";
+import { seedDemoInstallations } from "./demo-installations";
 import { accessoryProfiles, memberships, organisations, savedChecks, trailerProfiles, users, vehicleProfiles } from "./schema";
 
 /**
@@ -46,8 +47,11 @@ export async function seedDemo(): Promise<{ created: boolean }> {
       await tx.insert(users).values({ id: userId, email: person.email, name: person.name, passwordHash });
       await tx.insert(memberships).values({ id: newId(), userId, organisationId: person.organisationId, role: person.role });
     }
+    const vehicleIds = new Map<string, { id: string; data: Record<string, unknown> }>();
     for (const { name, ...data } of DEMO_VEHICLES) {
-      await tx.insert(vehicleProfiles).values({ id: newId(), organisationId: shop, name, units: "imperial", data: { units: "imperial", ...data } });
+      const id = newId();
+      vehicleIds.set(name, { id, data: { units: "imperial", ...data } });
+      await tx.insert(vehicleProfiles).values({ id, organisationId: shop, name, units: "imperial", data: { units: "imperial", ...data } });
     }
     for (const { name, ...data } of DEMO_TRAILERS) {
       await tx.insert(trailerProfiles).values({ id: newId(), organisationId: shop, name, units: "imperial", data: { units: "imperial", ...data } });
@@ -82,6 +86,8 @@ export async function seedDemo(): Promise<{ created: boolean }> {
       });
     }
     await (await import("./demo-training")).seedDemoTraining(tx, shop, userIds);
+    const crossover = vehicleIds.get("Corvane Tessel crossover");
+    if (crossover) await seedDemoInstallations(tx, shop, crossover.id, userIds.get("counter@quillfield.example.com")!, crossover.data);
   });
   return { created: true };
 }

@@ -8,8 +8,8 @@ import { confirmLimitsSchema } from "@/lib/validation/installations";
 
 export const dynamic = "force-dynamic";
 
-/** A confirmation is a token and a ticked box: a few hundred bytes. */
-const MAX_BODY_BYTES = 4 * 1024;
+/** A confirmation is a token and a ticked box: a few hundred bytes; 16 KiB leaves room and no more. */
+const MAX_BODY_BYTES = 16 * 1024;
 /** Per client address per minute; a customer confirms once. */
 const LIMIT_PER_MINUTE = 20;
 
