@@ -37,7 +37,7 @@ function LimitCell({ limit }: { limit: AllowanceLimit }) {
     <span className="flex flex-col">
       <span className="num text-lg font-semibold text-ink print:text-[10pt]">{formatQuantity(limit.value)}</span>
       <span className="text-xs text-ink-soft print:text-[7pt]">
-        set by the {limit.governing.label.toLowerCase()}
+        set by the {limit.governing.id.startsWith("parts.") ? limit.governing.label : limit.governing.label.replace(/ with WD$/, "").toLowerCase()}
         {limit.missing.length ? "; a figure is missing, it may be lower" : ""}
       </span>
     </span>
@@ -145,11 +145,7 @@ export function HandOverSheet({ shopName, record, allowance, measuredBy, confirm
                     m ? (
                       <>
                         <span className="num font-medium">{formatQuantity({ value: m.value, unit: lu })}</span>
-                        <span className="text-ink-soft">
-                          {" "}
-                          · {m.method ?? "method not noted"}
-                          {m.measuredByUserId && measuredBy[m.measuredByUserId] ? `, by ${measuredBy[m.measuredByUserId]}` : ""}
-                        </span>
+                        {m.measuredByUserId && measuredBy[m.measuredByUserId] ? <span className="text-ink-soft">, by {measuredBy[m.measuredByUserId]}</span> : null}
                       </>
                     ) : (
                       <span className="text-ink-soft">not measured</span>
@@ -159,6 +155,7 @@ export function HandOverSheet({ shopName, record, allowance, measuredBy, confirm
               );
             })}
           </dl>
+          {methodNote(record) ? <p className="mt-1 text-xs text-ink-soft print:text-[7pt]">{methodNote(record)}</p> : null}
         </section>
       </div>
 
@@ -215,4 +212,12 @@ function PartRow({ label, text }: { label: string; text: ReactNode }) {
       <dd>{text}</dd>
     </>
   );
+}
+
+/** How the figures were measured, said once when they share a method, else per figure. */
+function methodNote(record: InstallationRecord): string | undefined {
+  const methods = MEASUREMENT_KEYS.map((key) => record.measurements[key]?.method).filter((m): m is string => Boolean(m));
+  if (!methods.length) return undefined;
+  if (methods.every((m) => m === methods[0])) return `Measured: ${methods[0]}.`;
+  return MEASUREMENT_KEYS.filter((key) => record.measurements[key]?.method).map((key) => `${MEASUREMENT_WORDS[key].label}: ${record.measurements[key]!.method}`).join("; ") + ".";
 }

@@ -90,8 +90,8 @@ export interface HitchAllowance {
     riseNeeded?: Quantity;
     keepsDepartureAngle?: boolean;
   };
-  raisedShank: { advisable: boolean; reasons: string[] };
-  /** Plain sentences for the customer, in order. */
+  raisedShank: { advisable: boolean; reasons: string[]; statement: string };
+  /** Plain sentences for the customer, in order (the raised shank has its own, in `raisedShank.statement`). */
   statements: string[];
   missing: Array<{ field: string; what: string }>;
   steps: Step[];
@@ -122,7 +122,7 @@ function limitOf(input: HitchAllowanceInput, kind: Kind, wd: boolean, wu: UnitSt
   const ratings: AllowanceRating[] = [];
   const missing: AllowanceLimit["missing"] = [];
   const pick = (id: string, label: string, plain: number | undefined, withWd: number | undefined, required: boolean) => {
-    if (wd && okNum(withWd)) ratings.push({ id, label: `${label} with weight distribution`, value: withWd, unit: wu });
+    if (wd && okNum(withWd)) ratings.push({ id, label: `${label} with WD`, value: withWd, unit: wu });
     else if (okNum(plain)) ratings.push({ id, label, value: plain, unit: wu, note: wd ? WD_FALLBACK : undefined });
     else if (required) missing.push({ id, label });
   };
@@ -130,10 +130,10 @@ function limitOf(input: HitchAllowanceInput, kind: Kind, wd: boolean, wu: UnitSt
   const h = input.hitch;
   if (kind === "gtw") {
     pick(wd && okNum(v.towRatingWd) ? "vehicle.towRatingWd" : "vehicle.towRating", "Vehicle tow rating", v.towRating, v.towRatingWd, true);
-    pick(wd && okNum(h.gtwRatingWd) ? "hitch.gtwRatingWd" : "hitch.gtwRating", "Hitch label, gross trailer weight", h.gtwRating, h.gtwRatingWd, true);
+    pick(wd && okNum(h.gtwRatingWd) ? "hitch.gtwRatingWd" : "hitch.gtwRating", "Hitch label", h.gtwRating, h.gtwRatingWd, true);
   } else {
     pick(wd && okNum(v.tongueWeightLimitWd) ? "vehicle.tongueWeightLimitWd" : "vehicle.tongueWeightLimit", "Vehicle tongue-weight limit", v.tongueWeightLimit, v.tongueWeightLimitWd, true);
-    pick(wd && okNum(h.twRatingWd) ? "hitch.twRatingWd" : "hitch.twRating", "Hitch label, tongue weight", h.twRating, h.twRatingWd, true);
+    pick(wd && okNum(h.twRatingWd) ? "hitch.twRatingWd" : "hitch.twRating", "Hitch label", h.twRating, h.twRatingWd, true);
   }
   (input.parts ?? []).forEach((part, i) => {
     const field = kind === "gtw" ? "gtwRating" : "twRating";
@@ -189,8 +189,9 @@ export function hitchAllowance(input: HitchAllowanceInput): HitchAllowance {
     if (!limit.governing) return `No ${what} ${how} can be given yet: neither the vehicle's nor the hitch's figure is on record.`;
     const rest = limit.missing.length ? ` (${limit.missing.map((m) => m.label.toLowerCase()).join(" and ")} not on record, so it may be lower)` : "";
     const lead = how[0]!.toUpperCase() + how.slice(1);
-    const claim = what === "tongue weight" ? `the trailer's tongue may press at most ${show(limit.governing.value, wu)} on the ball` : `the trailer may weigh at most ${show(limit.governing.value, wu)}, loaded`;
-    return `${lead}, ${claim}: the ${limit.governing.label.toLowerCase()} sets it${rest}.`;
+    const claim = what === "tongue weight" ? `the trailer's tongue may press at most ${show(limit.governing.value, wu)} on the ball` : `the trailer may weigh at most ${show(limit.governing.value, wu)} loaded`;
+    const by = limit.governing.id.startsWith("parts.") ? limit.governing.label : limit.governing.label.replace(/ with WD$/, "").toLowerCase();
+    return `${lead}, ${claim}; the ${by} sets this${rest}.`;
   };
   statements.push(
     sayLimit(weightCarrying.grossTrailerWeight, "gross trailer weight", "without weight distribution"),
@@ -282,7 +283,7 @@ export function hitchAllowance(input: HitchAllowanceInput): HitchAllowance {
   }
 
   const advisable = reasons.length > 0;
-  statements.push(advisable ? `A raised shank is advisable for racks and carriers. ${reasons.join(" ")}` : "No raised shank is needed for the figures on record.");
+  const shankStatement = advisable ? `A raised shank is advisable for racks and carriers. ${reasons.join(" ")}` : "No raised shank is needed for the figures on record.";
 
   const cautions = [
     ...GENERAL_CAUTIONS,
@@ -295,7 +296,7 @@ export function hitchAllowance(input: HitchAllowanceInput): HitchAllowance {
     withWd,
     foldedDepthMax,
     carrier,
-    raisedShank: { advisable, reasons },
+    raisedShank: { advisable, reasons, statement: shankStatement },
     statements,
     missing,
     steps,
