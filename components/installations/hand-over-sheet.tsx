@@ -55,7 +55,7 @@ export function HandOverSheet({ shopName, record, allowance, measuredBy, confirm
   ].filter(Boolean).join(", ");
   const rating = (value: number | undefined) => (value === undefined ? "—" : `${formatNumber(value, wu)} ${wu}`);
   return (
-    <article aria-labelledby="handover-title" className="mx-auto w-full max-w-3xl px-4 pt-5 pb-10 text-ink sm:px-6 sm:pt-8 print:max-w-none print:p-0 print:text-[8pt] print:leading-snug">
+    <article aria-labelledby="handover-title" className="mx-auto w-full max-w-3xl px-1 pt-5 pb-10 text-ink sm:px-6 sm:pt-8 print:max-w-none print:p-0 print:text-[8pt] print:leading-snug">
       <header className="flex items-start justify-between gap-4 border-b border-rule pb-4 print:pb-1">
         <div className="min-w-0">
           <p className="text-xs font-medium tracking-wide text-ink-faint uppercase">Hitch hand-over</p>
@@ -75,7 +75,7 @@ export function HandOverSheet({ shopName, record, allowance, measuredBy, confirm
           What this hitch allows
         </h2>
         <div className="mt-2 overflow-x-auto">
-          <table className="w-full min-w-[20rem] border-collapse text-sm print:text-[8pt]">
+          <table className="w-full border-collapse text-sm print:text-[8pt]">
             <caption className="sr-only">The heaviest trailer and tongue weight, with and without weight distribution</caption>
             <thead>
               <tr className="border-b border-rule text-left text-xs text-ink-soft">
@@ -86,12 +86,12 @@ export function HandOverSheet({ shopName, record, allowance, measuredBy, confirm
             </thead>
             <tbody>
               <tr className="border-b border-rule align-top">
-                <th scope="row" className="py-2 pr-3 text-left font-medium">Trailer, loaded (gross trailer weight)</th>
+                <th scope="row" className="py-2 pr-2 text-left font-medium sm:pr-3">Trailer, loaded <span className="font-normal text-ink-soft">(gross trailer weight)</span></th>
                 <td className="py-2 pr-3"><LimitCell limit={a.weightCarrying.grossTrailerWeight} /></td>
                 <td className="py-2"><LimitCell limit={a.withWd.grossTrailerWeight} /></td>
               </tr>
               <tr className="align-top">
-                <th scope="row" className="py-2 pr-3 text-left font-medium">Weight on the ball (tongue weight)</th>
+                <th scope="row" className="py-2 pr-2 text-left font-medium sm:pr-3">Weight on the ball <span className="font-normal text-ink-soft">(tongue weight)</span></th>
                 <td className="py-2 pr-3"><LimitCell limit={a.weightCarrying.tongueWeight} /></td>
                 <td className="py-2"><LimitCell limit={a.withWd.tongueWeight} /></td>
               </tr>

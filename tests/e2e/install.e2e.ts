@@ -114,7 +114,7 @@ describe("an installation: fitted from a fleet vehicle, measured, ticked, handed
   it("the installer sees the confirmation on the record", async () => {
     const { page } = installer;
     await page.goto(recordUrl);
-    await expect.poll(() => page.getByTestId("customer-confirmation").innerText()).toContain("confirmed on their page");
+    await expect.poll(() => page.getByTestId("customer-confirmation").innerText()).toMatch(/^The customer confirmed on their page/);
   });
 
   it("the hand-over prints on one sheet, Letter and A4, from the customer's page and the record", async () => {

@@ -171,6 +171,8 @@ describe("the hand-over", () => {
     const post = (body: string, headers: Record<string, string> = {}) =>
       confirmRoute(new Request("http://t/api/v1/handover/confirm", { method: "POST", body, headers: { origin: "http://t", "content-type": "application/x-www-form-urlencoded", ...headers } }));
     expect((await post(`token=${token}&confirm=yes`, { origin: "https://elsewhere.example.com" })).status).toBe(403);
+    // A page with no-referrer sends "Origin: null": only a same-origin fetch marker lets that through.
+    expect((await post(`token=${token}&confirm=yes`, { origin: "null", "sec-fetch-site": "cross-site" })).status).toBe(403);
     expect((await post(`token=${token}`)).status).toBe(400);
     const db = await getDb();
     expect((await db.select().from(installationRecords).where(eq(installationRecords.id, recordId)).get())!.customerConfirmedAt).toBeNull();
