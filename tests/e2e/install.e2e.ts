@@ -1,4 +1,6 @@
+import AxeBuilder from "@axe-core/playwright";
 import { createClient } from "@libsql/client";
+import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { DESKTOP, latestMailTo, openBrowser, PHONE, screenshot, signIn } from "./support/browser";
 
@@ -16,6 +18,12 @@ async function one(sql: string, args: string[] = []) {
 /** Pages in a PDF: one "/Type /Page" object per page (the page tree is "/Type /Pages"). */
 function pageCount(pdf: Buffer): number {
   return (pdf.toString("latin1").match(/\/Type\s*\/Page(?![s\w])/g) ?? []).length;
+}
+
+/** axe-core's WCAG 2.x A and AA rules: the serious and critical findings, as text. */
+async function seriousFindings(page: Page): Promise<string[]> {
+  const results = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "best-practice"]).analyze();
+  return results.violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).slice(0, 3).join(", ")}`);
 }
 
 describe("an installation: fitted from a fleet vehicle, measured, ticked, handed over, confirmed on a phone", () => {
@@ -58,6 +66,7 @@ describe("an installation: fitted from a fleet vehicle, measured, ticked, handed
     await page.getByLabel("Lights tested through the new wiring").check();
     await page.getByLabel(/A carrier the customer asked about/).fill("22");
     await screenshot(page, "install-form-desktop");
+    expect(await seriousFindings(page)).toEqual([]);
     // A figure out of range is refused beside its field before anything is sent.
     await page.getByLabel("Receiver height").fill("75");
     await page.getByRole("button", { name: "Create the record" }).click();
@@ -69,6 +78,7 @@ describe("an installation: fitted from a fleet vehicle, measured, ticked, handed
     await page.getByTestId("profile-note").getByText("went into the vehicle").waitFor();
     await page.getByRole("heading", { name: "What this hitch allows" }).waitFor();
     await screenshot(page, "install-record-desktop");
+    expect(await seriousFindings(page)).toEqual([]);
   });
 
   it("the vehicle now carries the measured figures, marked with the record they came from", async () => {
@@ -103,6 +113,7 @@ describe("an installation: fitted from a fleet vehicle, measured, ticked, handed
     await expect.poll(() => page.getByTestId("allowance-statements").innerText()).toContain("Without weight distribution, the trailer may weigh at most");
     await page.getByText("The vehicle maker's figures").waitFor();
     await screenshot(page, "install-customer-phone");
+    expect(await seriousFindings(page)).toEqual([]);
     await page.getByLabel(/I have read what this hitch allows/).check();
     await page.getByRole("button", { name: "Confirm I have read the limits" }).click();
     await page.getByTestId("confirmed").waitFor();
@@ -111,8 +122,14 @@ describe("an installation: fitted from a fleet vehicle, measured, ticked, handed
     expect(row!.at).not.toBeNull();
   });
 
-  it("the installer sees the confirmation on the record", async () => {
+  it("the installer sees the confirmation on the record, and the list filters by state", async () => {
     const { page } = installer;
+    await page.goto("/installations");
+    await page.getByLabel("State").selectOption("handed-over");
+    await page.getByRole("link", { name: /\d{4}-\d{2}-\d{2}/ }).first().waitFor();
+    await expect.poll(() => page.getByRole("row").filter({ hasText: "Tobiah Marchetti" }).count()).toBe(1);
+    await expect.poll(() => page.getByRole("row").filter({ hasText: "Mirela Oakhurst" }).count()).toBe(0);
+    await screenshot(page, "install-list-desktop");
     await page.goto(recordUrl);
     await expect.poll(() => page.getByTestId("customer-confirmation").innerText()).toMatch(/^The customer confirmed on their page/);
   });
