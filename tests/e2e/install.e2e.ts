@@ -132,6 +132,10 @@ describe("an installation: fitted from a fleet vehicle, measured, ticked, handed
     await screenshot(page, "install-list-desktop");
     await page.goto(recordUrl);
     await expect.poll(() => page.getByTestId("customer-confirmation").innerText()).toMatch(/^The customer confirmed on their page/);
+    await page.setViewportSize(PHONE);
+    await page.getByRole("heading", { name: "What this hitch allows" }).waitFor();
+    await screenshot(page, "install-record-phone");
+    await page.setViewportSize(DESKTOP);
   });
 
   it("the hand-over prints on one sheet, Letter and A4, from the customer's page and the record", async () => {
