@@ -87,13 +87,16 @@ export async function readMultipartBody(request: Request, limit: Limit): Promise
 /**
  * Custom POST routes answer only this app's own pages and programs that send no Origin: a browser always
  * sends Origin on a cross-site POST, and SameSite cookies alone leave a gap for sibling subdomains and older
- * browsers. `Sec-Fetch-Site: cross-site` is refused too.
+ * browsers. `Sec-Fetch-Site: cross-site` is refused too. A page served with `Referrer-Policy: no-referrer`
+ * (the customer's pages) makes the browser send `Origin: null`; that passes only beside
+ * `Sec-Fetch-Site: same-origin`, a header no page can set.
  */
 export function refuseForeignOrigin(request: Request): Response | null {
   const origin = request.headers.get("origin");
   const site = request.headers.get("sec-fetch-site");
   const own = new URL(env.APP_URL).origin;
-  if ((origin !== null && origin !== own) || site === "cross-site") {
+  const opaqueFromHere = origin === "null" && site === "same-origin";
+  if ((origin !== null && origin !== own && !opaqueFromHere) || site === "cross-site") {
     return json({ ok: false, error: "forbidden", message: "This request came from another site and was refused." }, 403);
   }
   return null;

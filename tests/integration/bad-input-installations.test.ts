@@ -171,7 +171,7 @@ const TARGETS: Target[] = [
       // The per-address limit would otherwise answer 429 part-way through the corpus.
       resetRateLimits();
       const text = body as string;
-      return fromResponse(await confirmRoute(request("/api/v1/handover/confirm", { method: "POST", body: text, headers: { origin: "http://t", "content-type": "application/json", "content-length": String(Buffer.byteLength(text)) } })));
+      return fromResponse(await confirmRoute(request("/api/v1/handover/confirm", { method: "POST", body: text, headers: { origin: "http://localhost:3000", "content-type": "application/json", "content-length": String(Buffer.byteLength(text)) } })));
     },
   },
 ];

@@ -169,7 +169,7 @@ describe("the hand-over", () => {
 
   it("the customer confirms they have read the limits; the record keeps when", async () => {
     const post = (body: string, headers: Record<string, string> = {}) =>
-      confirmRoute(new Request("http://t/api/v1/handover/confirm", { method: "POST", body, headers: { origin: "http://t", "content-type": "application/x-www-form-urlencoded", ...headers } }));
+      confirmRoute(new Request("http://t/api/v1/handover/confirm", { method: "POST", body, headers: { origin: "http://localhost:3000", "content-type": "application/x-www-form-urlencoded", ...headers } }));
     expect((await post(`token=${token}&confirm=yes`, { origin: "https://elsewhere.example.com" })).status).toBe(403);
     // A page with no-referrer sends "Origin: null": only a same-origin fetch marker lets that through.
     expect((await post(`token=${token}&confirm=yes`, { origin: "null", "sec-fetch-site": "cross-site" })).status).toBe(403);
@@ -191,7 +191,7 @@ describe("the hand-over", () => {
     expect(link.tokenHash).not.toContain(token);
     expect((await revokeInstallationLinkAction(initialFormState, form({ linkId: link.id }))).ok).toBe(true);
     expect(await handOverByToken(token)).toBeUndefined();
-    const answer = await confirmRoute(new Request("http://t/api/v1/handover/confirm", { method: "POST", body: JSON.stringify({ token, confirm: "yes" }), headers: { origin: "http://t", "content-type": "application/json" } }));
+    const answer = await confirmRoute(new Request("http://t/api/v1/handover/confirm", { method: "POST", body: JSON.stringify({ token, confirm: "yes" }), headers: { origin: "http://localhost:3000", "content-type": "application/json" } }));
     expect(answer.status).toBe(404);
     expect(await answer.text()).not.toContain("Ottoline");
   });

@@ -1,6 +1,6 @@
+import { readLimitedBytes, refuseForeignOrigin } from "@/lib/server/body";
 import { badRequest, json } from "@/lib/server/http";
 import { confirmLimitsByToken } from "@/lib/server/installations";
-import { sameOrigin } from "@/lib/server/origin";
 import { consume } from "@/lib/server/rate-limit";
 import { clientAddress } from "@/lib/server/request";
 import { fieldErrorsFrom } from "@/lib/validation/form-state";
@@ -20,13 +20,18 @@ const LIMIT_PER_MINUTE = 20;
  * JavaScript) is sent back to the page; a JSON post gets JSON.
  */
 export async function POST(request: Request) {
-  if (!sameOrigin(request)) return json({ error: "forbidden", message: "This form can only be sent from its own page." }, 403);
-  const limit = consume(`handover-confirm:${await clientAddress()}`, LIMIT_PER_MINUTE, 60_000);
+  const foreign = refuseForeignOrigin(request);
+  if (foreign) return foreign;
+  const limit = await consume(`handover-confirm:${await clientAddress()}`, LIMIT_PER_MINUTE, 60_000);
   if (!limit.allowed) return json({ error: "rate_limited", message: "Too many tries: wait a minute and try again." }, 429, { "retry-after": String(limit.retryAfterSeconds) });
-  const tooLarge = () => json({ ok: false, error: "too_large", message: "The confirmation is too large." }, 413);
-  if (Number(request.headers.get("content-length") ?? 0) > MAX_BODY_BYTES) return tooLarge();
-  const text = await request.text();
-  if (text.length > MAX_BODY_BYTES) return tooLarge();
+  const read = await readLimitedBytes(request, { bytes: MAX_BODY_BYTES, message: "The confirmation is too large.", field: "form" });
+  if (!read.ok) return read.response;
+  let text: string;
+  try {
+    text = new TextDecoder("utf-8", { fatal: true }).decode(read.value);
+  } catch {
+    return badRequest({ form: ["Send the confirmation as JSON or as a form."] });
+  }
   const isJson = (request.headers.get("content-type") ?? "").includes("application/json");
   let body: unknown;
   if (isJson) {

@@ -1,6 +1,7 @@
 import { revalidatePath } from "next/cache";
 import { env } from "@/lib/env";
 import { authorize } from "@/lib/server/access";
+import { readMultipartBody, refuseForeignOrigin } from "@/lib/server/body";
 import { badRequest, json, refusal } from "@/lib/server/http";
 import { uploadInstallationPhoto } from "@/lib/server/installations";
 import { fieldErrorsFrom } from "@/lib/validation/form-state";
@@ -13,15 +14,18 @@ const tooLarge = () =>
 
 /** A photo of the hitch label or the fitted hitch for a record (multipart: recordId, kind, file). */
 export async function POST(request: Request) {
+  const foreign = refuseForeignOrigin(request);
+  if (foreign) return foreign;
   const allowed = await authorize("installations.edit");
   if (!allowed.ok) return refusal(allowed);
-  if (Number(request.headers.get("content-length") ?? "0") > env.UPLOAD_MAX_BYTES + 64 * 1024) return tooLarge();
-  let data: FormData;
-  try {
-    data = await request.formData();
-  } catch {
-    return badRequest({ file: ["Send the photo as a form upload (multipart/form-data)."] });
-  }
+  const body = await readMultipartBody(request, {
+    bytes: env.UPLOAD_MAX_BYTES + 64 * 1024,
+    message: "The file is too large.",
+    field: "file",
+    fieldMessage: `Upload at most ${Math.round(env.UPLOAD_MAX_BYTES / 1024 / 1024)} MB.`,
+  });
+  if (!body.ok) return body.response;
+  const data = body.value;
   const fields = photoUploadSchema.safeParse({ recordId: data.get("recordId") ?? undefined, kind: data.get("kind") ?? undefined });
   const fieldErrors: Record<string, string[]> = fields.success ? {} : fieldErrorsFrom(fields.error.issues);
   const file = data.get("file");
