@@ -1,9 +1,9 @@
 /**
  * Evaluate one rig from standard input: `npm run --silent evaluate < rig.json`.
- * Prints the full result as JSON; on bad input prints `{ "ok": false, "fieldErrors": … }` and exits 1.
+ * Prints the full result as JSON (the compact one for `{ rig, detail: "summary" }`); on bad input prints `{ "ok": false, "fieldErrors": … }` and exits 1.
  * Shapes: docs/evaluate.md.
  */
-import { evaluateRig, parseEvaluateRequest } from "../lib/towing/index";
+import { evaluateRig, evaluateRigSummary, parseEvaluateRequest } from "../lib/towing/index";
 
 async function readStdin(): Promise<string> {
   const chunks: Buffer[] = [];
@@ -25,4 +25,5 @@ try {
 }
 const request = parseEvaluateRequest(body);
 if (!request.ok) fail(request.fieldErrors);
-process.stdout.write(JSON.stringify(evaluateRig(request.rig, request.options), null, 2) + "\n");
+const result = request.detail === "summary" ? evaluateRigSummary(request.rig, request.options) : evaluateRig(request.rig, request.options);
+process.stdout.write(JSON.stringify(result, null, 2) + "\n");

@@ -15,10 +15,10 @@ import { checkEnvelope } from "./checks/envelope";
 import { checkPayload } from "./checks/payload";
 import { checkTongueMeasure } from "./checks/tongue-measure";
 import { checkTongueShare } from "./checks/tongue-share";
-import { buildVerdict } from "./checks/verdict";
+import { buildVerdict, GENERAL_CAUTIONS } from "./checks/verdict";
 import { checkWeakestLink } from "./checks/weakest-link";
 import { checkWeightDistribution } from "./checks/weight-distribution";
-import type { AnyCheckResult, CheckId, EvaluateOptions, FastCheck, FastRigResult, RigResult } from "./types";
+import type { AnyCheckResult, CheckId, EvaluateOptions, FastCheck, FastRigResult, RigResult, RigSummary } from "./types";
 import { CHECK_IDS } from "./types";
 import { lengthIn, unitSet } from "./units";
 import { CORE_VERSION } from "./version";
@@ -94,6 +94,37 @@ export function evaluateRigFast(input: RigInput, options?: EvaluateOptions): Fas
     incomplete: verdict.incomplete,
     governing: verdict.governing,
     checks: summary,
+  };
+}
+
+/**
+ * The compact answer (`"detail": "summary"`): the verdict, and each check's status, limit, actual and margin,
+ * with no worked steps, messages or advice. The same checks as evaluateRig, run without their texts.
+ */
+export function evaluateRigSummary(input: RigInput, options?: EvaluateOptions): RigSummary {
+  const { checks, notApplicable, verdict } = run(input, context(input, options, false));
+  return {
+    coreVersion: CORE_VERSION,
+    units: input.units,
+    detail: "summary",
+    checks: checks.map((check) => ({
+      id: check.id,
+      status: check.status,
+      limit: check.limit,
+      actual: check.actual,
+      margin: check.margin,
+      governing: check.governing,
+    })),
+    notApplicable,
+    verdict: {
+      level: verdict.level,
+      levelFromCheckedOnly: verdict.levelFromCheckedOnly,
+      complete: verdict.complete,
+      incomplete: verdict.incomplete,
+      governing: verdict.governing,
+      tightMarginRatio: verdict.tightMarginRatio,
+      cautions: GENERAL_CAUTIONS,
+    },
   };
 }
 

@@ -3,7 +3,7 @@
  * See docs/core.md.
  */
 export { CORE_VERSION } from "./version";
-export { evaluateRig, evaluateRigFast, DEFAULT_TIGHT_MARGIN_RATIO, DEFAULT_REFERENCE_ARM_IN } from "./evaluate";
+export { evaluateRig, evaluateRigFast, evaluateRigSummary, DEFAULT_TIGHT_MARGIN_RATIO, DEFAULT_REFERENCE_ARM_IN } from "./evaluate";
 export {
   rigInputSchema,
   parseRig,
@@ -22,7 +22,7 @@ export {
   type AccessoryType,
 } from "./input";
 export { convertRig } from "./convert-rig";
-export { parseEvaluateRequest, type EvaluateRequest } from "./request";
+export { parseEvaluateRequest, type EvaluateRequest, type EvaluateDetail } from "./request";
 export { tongueWeightByScale, tongueWeightByBeam, tongueWeightByPublicScale, DIRECT_SCALE_LIMIT_LB, type MeasureResult, type AxlePair } from "./measure";
 export { GENERAL_CAUTIONS } from "./checks/verdict";
 export { TONGUE_BANDS } from "./derive";

@@ -1,12 +1,15 @@
 /**
  * The evaluate contract shared by `npm run evaluate` and `POST /api/v1/evaluate`: a bare rig, or
- * `{ rig, options }`. Never throws; field-error keys are dotted paths (docs/evaluate.md).
+ * `{ rig, options, detail }`. Never throws; field-error keys are dotted paths (docs/evaluate.md).
  */
 import { parseRig, type RigInput } from "./input";
 import type { EvaluateOptions } from "./types";
 
+/** "full" (the default): every check with its worked steps and texts. "summary": verdict and figures only. */
+export type EvaluateDetail = "full" | "summary";
+
 export type EvaluateRequest =
-  | { ok: true; rig: RigInput; options: EvaluateOptions }
+  | { ok: true; rig: RigInput; options: EvaluateOptions; detail: EvaluateDetail }
   | { ok: false; fieldErrors: Record<string, string[]> };
 
 export function parseEvaluateRequest(body: unknown): EvaluateRequest {
@@ -14,6 +17,14 @@ export function parseEvaluateRequest(body: unknown): EvaluateRequest {
   const rawRig = wrapped ? (body as { rig: unknown }).rig : body;
   const rawOptions = wrapped ? (body as { options?: unknown }).options : undefined;
   const options: EvaluateOptions = {};
+  let detail: EvaluateDetail = "full";
+  if (wrapped) {
+    const rawDetail = (body as { detail?: unknown }).detail;
+    if (rawDetail !== undefined) {
+      if (rawDetail !== "full" && rawDetail !== "summary") return { ok: false, fieldErrors: { detail: ['Choose "full" or "summary".'] } };
+      detail = rawDetail;
+    }
+  }
   if (rawOptions !== undefined) {
     if (rawOptions === null || typeof rawOptions !== "object" || Array.isArray(rawOptions)) {
       return { ok: false, fieldErrors: { options: ["Options must be an object."] } };
@@ -33,5 +44,5 @@ export function parseEvaluateRequest(body: unknown): EvaluateRequest {
     }
   }
   const parsed = parseRig(rawRig);
-  return parsed.ok ? { ok: true, rig: parsed.rig, options } : parsed;
+  return parsed.ok ? { ok: true, rig: parsed.rig, options, detail } : parsed;
 }

@@ -222,6 +222,26 @@ export interface RigResult {
   verdict: VerdictResult;
 }
 
+/** One check in the compact answer: figures only, no steps or texts. */
+export interface SummaryCheck {
+  id: CheckId;
+  status: CheckStatus;
+  limit?: Quantity;
+  actual?: Quantity;
+  margin?: Margin;
+  governing?: Governing;
+}
+
+/** The compact evaluate answer (`"detail": "summary"`, docs/evaluate.md). */
+export interface RigSummary {
+  coreVersion: string;
+  units: UnitSystem;
+  detail: "summary";
+  checks: SummaryCheck[];
+  notApplicable: CheckId[];
+  verdict: Pick<VerdictResult, "level" | "levelFromCheckedOnly" | "complete" | "incomplete" | "governing" | "tightMarginRatio" | "cautions">;
+}
+
 export interface FastCheck {
   id: CheckId;
   status: CheckStatus;

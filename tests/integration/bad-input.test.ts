@@ -68,6 +68,15 @@ const TARGETS: Target[] = [
     call: async (body) => fromResponse(await evaluate(jsonRequest("http://t/api/v1/evaluate", body as string))),
   },
   {
+    name: "POST /api/v1/evaluate (summary)",
+    actor: "anonymous",
+    transport: "json",
+    // The rig's own fields are covered above (the wrapped form answers the same keys, without "rig.").
+    fields: [{ path: "detail", kind: "enum" }],
+    base: () => ({ rig: structuredClone(camper), detail: "summary" }),
+    call: async (body) => fromResponse(await evaluate(jsonRequest("http://t/api/v1/evaluate", body as string))),
+  },
+  {
     name: "POST /api/v1/checks",
     actor: "staffA",
     transport: "json",

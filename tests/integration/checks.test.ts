@@ -189,6 +189,21 @@ describe("POST /api/v1/evaluate", () => {
     expect(["within", "tight", "over"]).toContain(body.verdict.level);
   });
 
+  it('answers the compact result for "detail": "summary": verdict and figures, no worked steps', async () => {
+    await actAs("anonymous");
+    const response = await post(JSON.stringify({ rig: camper, detail: "summary" }));
+    expect(response.status).toBe(200);
+    const body = (await response.json()) as { detail: string; verdict: { level: string; cautions: string[] }; checks: Array<Record<string, unknown>> };
+    expect(body.detail).toBe("summary");
+    expect(["within", "tight", "over"]).toContain(body.verdict.level);
+    expect(body.verdict.cautions.length).toBeGreaterThan(0);
+    expect(body.checks.length).toBeGreaterThan(0);
+    for (const check of body.checks) expect(check).not.toHaveProperty("steps");
+    const wrong = await post(JSON.stringify({ rig: camper, detail: "everything" }));
+    expect(wrong.status).toBe(400);
+    expect(((await wrong.json()) as { fieldErrors: object }).fieldErrors).toEqual({ detail: ['Choose "full" or "summary".'] });
+  });
+
   it("answers 400 with field errors for bad input, and 413 for a huge body", async () => {
     const bad = await post(JSON.stringify({ ...camper, trailer: { ...camper.trailer, grossTrailerWeight: "heavy" } }));
     expect(bad.status).toBe(400);

@@ -1,5 +1,5 @@
 import { env } from "@/lib/env";
-import { evaluateRig, parseEvaluateRequest } from "@/lib/towing";
+import { evaluateRig, evaluateRigSummary, parseEvaluateRequest } from "@/lib/towing";
 import { readJsonBody, refuseForeignOrigin } from "@/lib/server/body";
 import { badRequest, json } from "@/lib/server/http";
 import { consume } from "@/lib/server/rate-limit";
@@ -11,7 +11,7 @@ const LIMIT = { bytes: 64 * 1024, message: "The rig must be under 64 KiB of JSON
 
 /**
  * The calculation core over HTTP, no account needed: the same input and output as `npm run evaluate`
- * (docs/evaluate.md): a bare rig or `{ rig, options }`. Nothing is stored.
+ * (docs/evaluate.md): a bare rig or `{ rig, options, detail }`. Nothing is stored.
  */
 export async function POST(request: Request) {
   const foreign = refuseForeignOrigin(request);
@@ -24,5 +24,5 @@ export async function POST(request: Request) {
   if (!body.ok) return body.response;
   const parsed = parseEvaluateRequest(body.value);
   if (!parsed.ok) return badRequest(parsed.fieldErrors);
-  return json(evaluateRig(parsed.rig, parsed.options));
+  return json(parsed.detail === "summary" ? evaluateRigSummary(parsed.rig, parsed.options) : evaluateRig(parsed.rig, parsed.options));
 }
