@@ -5,9 +5,9 @@ import { accessoryProfiles, savedChecks, trailerProfiles, vehicleProfiles } from
 import { exportFleetCsv, parseFleetCsv, type ParsedImport, type UnitsChoice } from "@/lib/fleet/csv";
 import { KIND_WORDS, SECTIONS_BY_KIND, type ProfileKind } from "@/lib/fleet/fields";
 import { can, type Permission } from "@/lib/roles";
-import { convertRig, evaluateRigFast } from "@/lib/towing";
+import { evaluatePair, profilePart, type MatrixCell } from "@/lib/fleet/matrix";
 import type { RigInput } from "@/lib/towing/input";
-import type { Governing, Margin, VerdictLevel } from "@/lib/towing/types";
+import type { VerdictLevel } from "@/lib/towing/types";
 import type { UnitSystem } from "@/lib/towing/units";
 import type { ImportOptions, MatrixQuery, ProfileInput } from "@/lib/validation/fleet";
 import type { AccessContext } from "./access";
@@ -201,12 +201,7 @@ export async function savedChecksOfVehicle(access: AccessContext, profile: Fleet
 
 // ---------------------------------------------------------------------------------------------- matrix
 
-export interface MatrixCell {
-  level: VerdictLevel;
-  complete: boolean;
-  governing?: Pick<Governing, "label" | "value" | "unit"> & { checkId: string };
-  margin?: Margin;
-}
+export type { MatrixCell };
 
 export interface MatrixColumn {
   id: string;
@@ -247,24 +242,8 @@ interface MatrixCacheEntry {
 
 const matrixCache = new Map<string, MatrixCacheEntry>();
 
-/** A profile's own sections in the wanted units (a trailer's part carries no vehicle section to overwrite the truck's). */
 function partOf(profile: FleetProfile, units: UnitSystem): Partial<RigInput> {
-  const rig = { units: profile.units, vehicle: {}, ...profile.data } as RigInput;
-  const converted = profile.units === units ? rig : convertRig(rig, units);
-  const { units: _u, vehicle, ...rest } = converted as RigInput;
-  return "vehicle" in profile.data ? { vehicle, ...rest } : rest;
-}
-
-function evaluatePair(units: UnitSystem, vehicle: Prepared["vehicles"][number], hitched: Prepared["hitched"][number], tightMarginRatio: number): MatrixCell {
-  const result = evaluateRigFast({ units, ...vehicle.part, ...hitched.part } as RigInput, { tightMarginRatio });
-  const governing = result.governing;
-  const margin = governing ? result.checks.find((check) => check.id === governing.checkId)?.margin : undefined;
-  return {
-    level: result.level,
-    complete: result.complete,
-    governing: governing ? { label: governing.label, value: governing.value, unit: governing.unit, checkId: governing.checkId } : undefined,
-    margin,
-  };
+  return profilePart(profile, units);
 }
 
 async function prepareMatrix(access: AccessContext): Promise<MatrixCacheEntry> {
@@ -303,7 +282,7 @@ function evaluateAll(entry: MatrixCacheEntry, units: UnitSystem, ratio: number):
     const cells = new Array<MatrixCell>(vehicles.length * width);
     const slice = Math.max(1, Math.floor(5_000 / Math.max(1, width)));
     for (let r = 0; r < vehicles.length; r++) {
-      for (let c = 0; c < width; c++) cells[r * width + c] = evaluatePair(units, vehicles[r]!, hitched[c]!, ratio);
+      for (let c = 0; c < width; c++) cells[r * width + c] = evaluatePair(units, vehicles[r]!.part, hitched[c]!.part, ratio);
       if (r % slice === slice - 1) await new Promise((resolve) => setImmediate(resolve));
     }
     entry.cells = cells;
@@ -379,7 +358,7 @@ export async function fleetMatrix(access: AccessContext, query: MatrixQuery): Pr
     cells: pageCols.map((c) => {
       let cell = entry.cells?.[r * width + c];
       if (!cell) {
-        cell = evaluatePair(units, vehicles[r]!, hitched[c]!, ratio);
+        cell = evaluatePair(units, vehicles[r]!.part, hitched[c]!.part, ratio);
         evaluated++;
       }
       return query.level && cell.level !== query.level ? null : cell;
