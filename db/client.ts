@@ -5,6 +5,7 @@ import { dirname, resolve } from "node:path";
 import { env } from "../lib/env";
 import * as schema from "./schema";
 import { scopedTransactions, serialClient } from "./serial-client";
+import { installStatementCache } from "./statement-cache";
 
 export type Database = LibSQLDatabase<typeof schema>;
 
@@ -27,6 +28,7 @@ function open(url: string, authToken: string | undefined): DatabaseHandle {
     const path = url.slice("file:".length);
     if (path && path !== ":memory:") mkdirSync(dirname(resolve(path)), { recursive: true });
   }
+  if (isLocalFile) installStatementCache();
   const client = isLocalFile ? serialClient(createClient({ url, concurrency: 1, timeout: 5000 })) : createClient({ url, authToken });
   const ready = (async () => {
     if (isLocalFile) {

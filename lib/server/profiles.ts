@@ -43,7 +43,13 @@ export async function createVehicleProfile(access: AccessContext, name: string, 
 
 /** The name of the organisation's vehicle profile whose figures are exactly this rig's vehicle, if any. */
 export async function matchVehicleProfileName(access: AccessContext, rig: RigInput): Promise<string | undefined> {
-  const { vehicles } = await listProfilesForCheck(access);
+  if (!can(access.role, "fleet.read")) throw new AccessDenied("fleet.read");
+  const db = await getDb();
+  const vehicles = (await db
+    .select({ name: vehicleProfiles.name, rig: vehicleProfiles.data })
+    .from(vehicleProfiles)
+    .where(and(eq(vehicleProfiles.organisationId, access.organisation.id), isNull(vehicleProfiles.archivedAt)))
+    .orderBy(asc(vehicleProfiles.name))) as Array<{ name: string; rig: VehicleProfileData }>;
   const wanted = JSON.stringify([rig.units, rig.vehicle]);
   return vehicles.find((profile) => JSON.stringify([profile.rig.units, profile.rig.vehicle]) === wanted)?.name;
 }

@@ -63,12 +63,13 @@ function ended(child: ChildProcess): Promise<void> {
   return new Promise((resolve) => child.once("exit", () => resolve()));
 }
 
-export async function startApp(databaseUrl: string, extraEnv: Record<string, string> = {}, port?: number): Promise<AppServer> {
+/** `nodeArgs` go before Next's own (for instance `--cpu-prof`, which NODE_OPTIONS does not take). */
+export async function startApp(databaseUrl: string, extraEnv: Record<string, string> = {}, port?: number, nodeArgs: string[] = []): Promise<AppServer> {
   const appPort = port ?? (await freePort());
   const baseURL = `http://127.0.0.1:${appPort}`;
   // `next start` directly (not through npx) so the process group is exactly this server.
   const nextBin = join(process.cwd(), "node_modules", "next", "dist", "bin", "next");
-  const child = spawn(process.execPath, [nextBin, "start", "-p", String(appPort), "-H", "127.0.0.1"], {
+  const child = spawn(process.execPath, [...nodeArgs, nextBin, "start", "-p", String(appPort), "-H", "127.0.0.1"], {
     env: {
       ...process.env,
       NODE_ENV: "production",
