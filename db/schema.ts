@@ -446,3 +446,18 @@ export const installationLinks = sqliteTable(
 );
 
 export type InstallationRecordRow = typeof installationRecords.$inferSelect;
+
+/**
+ * Rate-limit counters shared by every server process on the database: one fixed window per key
+ * (`sign-in:address:<ip>`, `evaluate:<ip>`, …). lib/server/rate-limit.ts counts with one UPSERT … RETURNING
+ * per check; rows whose window has ended are swept now and then.
+ */
+export const rateLimits = sqliteTable(
+  "rate_limits",
+  {
+    key: text("key").primaryKey(),
+    count: integer("count").notNull(),
+    resetAt: integer("reset_at").notNull(),
+  },
+  (table) => [index("rate_limits_reset_at_idx").on(table.resetAt)],
+);

@@ -1,43 +1,67 @@
 import "server-only";
+import { lt, sql } from "drizzle-orm";
+import { getDb, type Database } from "@/db/client";
+import { rateLimits } from "@/db/schema";
 
 /**
- * Fixed-window counters. Every limit in the app goes through `consume()`, which answers a promise so that
- * the buckets can move to a shared store (a database table, one UPSERT … RETURNING per check) without
- * touching a caller. Here they live in this process's memory: enough for one server.
+ * Fixed-window counters kept in the database (`rate_limits`), so that every server process on it counts
+ * against the same limit: a limit reached through one process holds on all of them. Every limit in the app
+ * goes through `consume()`.
  *
- * The table is bounded: when it is full, the oldest bucket goes first (a Map keeps insertion order, and a
- * bucket whose window starts again is moved to the end), so a flood of new names evicts only as many old
- * counters as it adds, never every counter at once.
+ * One statement per check: an UPSERT that starts the window again when it has ended, or adds one, and
+ * answers the count and the window's end (RETURNING). SQLite runs it atomically, so two processes counting
+ * the same key at once never lose a count. Windows that have ended are swept by the process that notices
+ * (at most once a minute per process), so a flood of new names leaves rows for one window at most.
  */
-interface Bucket {
-  count: number;
-  resetAt: number;
-}
-
-const buckets = new Map<string, Bucket>();
-export const MAX_BUCKETS = 50_000;
-
 export interface RateLimitResult {
   allowed: boolean;
   retryAfterSeconds: number;
 }
 
-export async function consume(key: string, limit: number, windowMs: number, now = Date.now()): Promise<RateLimitResult> {
-  let bucket = buckets.get(key);
-  if (!bucket || bucket.resetAt <= now) {
-    buckets.delete(key);
-    while (buckets.size >= MAX_BUCKETS) buckets.delete(buckets.keys().next().value!);
-    bucket = { count: 0, resetAt: now + windowMs };
-    buckets.set(key, bucket);
-  }
-  bucket.count += 1;
-  return {
-    allowed: bucket.count <= limit,
-    retryAfterSeconds: Math.max(1, Math.ceil((bucket.resetAt - now) / 1000)),
-  };
+const SWEEP_EVERY_MS = 60_000;
+let lastSweep = 0;
+
+type Counter = ReturnType<typeof prepareCounter>;
+const counters = new WeakMap<Database, Counter>();
+
+function prepareCounter(db: Database) {
+  const now = sql.placeholder("now");
+  return db
+    .insert(rateLimits)
+    .values({ key: sql.placeholder("key"), count: 1, resetAt: sql.placeholder("resetAt") })
+    .onConflictDoUpdate({
+      target: rateLimits.key,
+      // SQLite reads every right-hand side from the row as it was, so both CASEs see the old window.
+      set: {
+        count: sql`CASE WHEN ${rateLimits.resetAt} <= ${now} THEN 1 ELSE ${rateLimits.count} + 1 END`,
+        resetAt: sql`CASE WHEN ${rateLimits.resetAt} <= ${now} THEN excluded.reset_at ELSE ${rateLimits.resetAt} END`,
+      },
+    })
+    .returning({ count: rateLimits.count, resetAt: rateLimits.resetAt })
+    .prepare();
 }
 
-/** For tests only. */
-export function resetRateLimits() {
-  buckets.clear();
+export async function consume(key: string, limit: number, windowMs: number, now = Date.now()): Promise<RateLimitResult> {
+  const db = await getDb();
+  let counter = counters.get(db);
+  if (!counter) counters.set(db, (counter = prepareCounter(db)));
+  const row = await counter.get({ key, now, resetAt: now + windowMs });
+  if (now - lastSweep >= SWEEP_EVERY_MS) {
+    lastSweep = now;
+    void db
+      .delete(rateLimits)
+      .where(lt(rateLimits.resetAt, now))
+      .run()
+      .catch(() => undefined);
+  }
+  const count = Number(row?.count ?? 1);
+  const resetAt = Number(row?.resetAt ?? now + windowMs);
+  return { allowed: count <= limit, retryAfterSeconds: Math.max(1, Math.ceil((resetAt - now) / 1000)) };
+}
+
+/** For tests only: every counter of the database. */
+export async function resetRateLimits(): Promise<void> {
+  const db = await getDb();
+  await db.delete(rateLimits).run();
+  lastSweep = 0;
 }
