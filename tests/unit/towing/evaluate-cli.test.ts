@@ -21,7 +21,8 @@ describe("example rigs", () => {
   }
 });
 
-describe("evaluate command", () => {
+// Each test starts tsx once or twice; on a crowded machine that alone can take longer than the default 20 s.
+describe("evaluate command", { timeout: 90_000 }, () => {
   it("prints the full result for a good rig", () => {
     const out = cli(readFileSync(join(fixtures, "boat-on-suv.json"), "utf8"));
     expect(out.status).toBe(0);
@@ -38,5 +39,15 @@ describe("evaluate command", () => {
     expect(body.ok).toBe(false);
     expect(body.fieldErrors["vehicle.gvwr"][0]).toMatch(/kg/);
     expect(cli("not json").status).toBe(1);
+  });
+
+  it('prints the compact answer for { rig, detail: "summary" }', () => {
+    const rig = JSON.parse(readFileSync(join(fixtures, "boat-on-suv.json"), "utf8"));
+    const out = cli(JSON.stringify({ rig, detail: "summary" }));
+    expect(out.status).toBe(0);
+    const result = JSON.parse(out.stdout);
+    expect(result.detail).toBe("summary");
+    expect(result.verdict.cautions.length).toBe(5);
+    expect(out.stdout).not.toContain('"steps"');
   });
 });
