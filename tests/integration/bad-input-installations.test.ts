@@ -169,7 +169,7 @@ const TARGETS: Target[] = [
     base: () => ({ token, confirm: "yes" }),
     call: async (body) => {
       // The per-address limit would otherwise answer 429 part-way through the corpus.
-      resetRateLimits();
+      await resetRateLimits();
       const text = body as string;
       return fromResponse(await confirmRoute(request("/api/v1/handover/confirm", { method: "POST", body: text, headers: { origin: "http://localhost:3000", "content-type": "application/json", "content-length": String(Buffer.byteLength(text)) } })));
     },

@@ -129,8 +129,8 @@ beforeAll(async () => {
   await db.update(users).set({ passwordHash: await hashPassword("the right passphrase") }).where(eq(users.id, PEOPLE.staffA.id));
 });
 
-beforeEach(() => {
-  resetRateLimits();
+beforeEach(async () => {
+  await resetRateLimits();
   resetRequestHeaders();
   outbox.length = 0;
 });
