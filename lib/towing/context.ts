@@ -64,11 +64,15 @@ export function lessOrEqual(a: number, b: number): boolean {
   return a <= b + EPS * Math.max(1, Math.abs(b));
 }
 
-/** Status of `actual` against an upper `limit`: over below zero margin, tight under the threshold. */
-export function statusOf(actual: number, limit: number, tight: number): CheckStatus {
+/**
+ * Status of `actual` against an upper `limit`: over below zero margin, tight under the threshold. For a limit
+ * that is a set-up allowance rather than a rating, pass `beyond = "adjust"`; for a common-practice convention
+ * with no published source, pass `beyond = "tight"` (a convention never makes "over" by itself).
+ */
+export function statusOf(actual: number, limit: number, tight: number, beyond: "over" | "adjust" | "tight" = "over"): CheckStatus {
   const margin = limit - actual;
   const tol = EPS * Math.max(1, Math.abs(limit), Math.abs(actual));
-  if (margin < -tol) return "over";
+  if (margin < -tol) return beyond;
   const ratio = limit > TINY ? margin / limit : margin > tol ? 1 : 0;
   if (ratio < tight - EPS) return "tight";
   return "within";
@@ -93,16 +97,24 @@ export function marginL(c: Ctx, actual: number, limit: number): Margin {
   return { value: lengthOut(limit - actual, c.u), unit: c.u.length, ratio: ratioOf(actual, limit) };
 }
 
-const RANK: Record<CheckStatus, number> = { within: 0, tight: 1, incomplete: 2, over: 3 };
+const RANK: Record<CheckStatus, number> = { within: 0, tight: 1, adjust: 2, incomplete: 3, over: 4 };
 
-/** Worst of statuses: over beats incomplete beats tight beats within. */
+/** Severity rank of a status (within 0 … over 4), the order of STATUS_ORDER in types.ts. */
+export function rankOf(s: CheckStatus): number {
+  return RANK[s];
+}
+
+/** Worst of statuses: over beats incomplete beats adjust beats tight beats within. */
 export function worst(statuses: CheckStatus[]): CheckStatus {
   let w: CheckStatus = "within";
   for (const s of statuses) if (RANK[s] > RANK[w]) w = s;
   return w;
 }
 
-/** A known "over" stands even when data is missing: more data can only add limits. */
+/**
+ * A known "over" stands even when data is missing: more data can only add limits. Anything else with data
+ * missing is incomplete (a set-up finding is still in the check's advice).
+ */
 export function withMissing(status: CheckStatus, missing: MissingField[]): CheckStatus {
   if (status === "over") return "over";
   return missing.length ? "incomplete" : status;

@@ -1,7 +1,9 @@
 /**
  * Quantities several checks share, computed once per evaluation from the canonical (lb, in) rig.
  */
-import { lessOrEqual } from "./context";
+import { fW, lessOrEqual, type Ctx } from "./context";
+import { need } from "./missing";
+import type { MissingField } from "./types";
 import type { RigInput, TrailerType } from "./input";
 
 /** Tongue-weight share bands by trailer type, as ratios. */
@@ -23,12 +25,22 @@ export interface Derived {
   hasAccessory: boolean;
   wdUsed: boolean;
   gtw?: number;
-  /** Tongue weight the checks use: entered, else measured. */
+  /**
+   * Tongue weight every check uses. Weighed beats estimated: the measurement when the entered figure is an
+   * estimate; the larger of the two when both claim to be weighed or the entered figure's basis is not given.
+   */
   tw?: number;
+  /** True when `tw` is an estimate (entered as one, or entered without saying it was weighed, and not weighed). */
   twEstimated: boolean;
+  /** Where `tw` comes from. */
+  twSource?: "entered" | "measured" | "larger";
   /** Tongue weight from the rig's measurements, if any. */
   twMeasured?: number;
   twMethod?: "scale" | "beam" | "public-scale";
+  /** Fields a started measurement still lacks (one beam distance without the other): it gives no number. */
+  twMeasureMissing: string[];
+  /** Fields that would give a tongue weight: the measurement's missing distance, else the tongue weight. */
+  twNeed: string[];
   band: { min: number; max: number; source: "vehicle" | "trailer-type" };
   /** Vertical load on the hitch: the tongue weight, or accessory + its load. */
   hitchLoad?: number;
@@ -42,8 +54,14 @@ export interface Derived {
   weighedTotal?: number;
   /** Vehicle weight as loaded, unhitched. */
   loadedVehicle?: number;
-  /** Rear axle to the point where the hitch load acts. */
+  /** Rear axle to the receiver pin hole (the installer's measured figure), when known. */
+  pin?: number;
+  /** Rear axle to the point where the hitch load acts: the ball (pin + extender + ball mount) or the accessory's load. */
   overhang?: number;
+  /** How the overhang was reached: from the pin, or the ball's own figure from an older input. */
+  overhangFrom?: "pin" | "ball-as-measured";
+  /** Fields the overhang still needs. */
+  overhangNeed: string[];
   /** Per-evaluation memo for figures several checks share (rating set, restoration). */
   cache: { ratingSet?: unknown; wdState?: unknown };
 }
@@ -58,12 +76,18 @@ export function derive(rig: RigInput): Derived {
 
   let twMeasured: number | undefined;
   let twMethod: Derived["twMethod"];
+  const twMeasureMissing: string[] = [];
   const m = t?.tongueMeasurement;
   if (m) {
-    if (m.blockToJack !== undefined && m.jackToScale !== undefined && m.jackToScale > 0) {
+    const hasA = m.blockToJack !== undefined;
+    const hasB = m.jackToScale !== undefined;
+    if (hasA && hasB) {
       // Physics: statics, moments about the block: TW · a = reading · (a + b)
-      twMeasured = (m.scaleReading * (m.blockToJack + m.jackToScale)) / m.blockToJack;
+      twMeasured = (m.scaleReading * (m.blockToJack! + m.jackToScale!)) / m.blockToJack!;
       twMethod = "beam";
+    } else if (hasA || hasB) {
+      // A beam reading with one distance is not a tongue weight: the reading could be a third of it or less.
+      twMeasureMissing.push(hasA ? "trailer.tongueMeasurement.jackToScale" : "trailer.tongueMeasurement.blockToJack");
     } else {
       twMeasured = m.scaleReading;
       twMethod = "scale";
@@ -77,8 +101,32 @@ export function derive(rig: RigInput): Derived {
     }
   }
 
-  const tw = hasTrailer ? (t!.tongueWeight ?? twMeasured) : undefined;
-  const twEstimated = hasTrailer && t!.tongueWeight !== undefined && t!.tongueWeightBasis === "estimated";
+  let tw: number | undefined;
+  let twSource: Derived["twSource"];
+  let twEstimated = false;
+  if (hasTrailer) {
+    const entered = t!.tongueWeight;
+    if (entered === undefined) {
+      tw = twMeasured;
+      if (tw !== undefined) twSource = "measured";
+    } else if (twMeasured === undefined) {
+      tw = entered;
+      twSource = "entered";
+      // Only a figure said to be weighed counts as weighed; without a basis it is taken as an estimate.
+      twEstimated = t!.tongueWeightBasis !== "measured";
+    } else if (t!.tongueWeightBasis === "estimated") {
+      tw = twMeasured;
+      twSource = "measured";
+    } else if (lessOrEqual(entered, twMeasured) && lessOrEqual(twMeasured, entered)) {
+      tw = twMeasured;
+      twSource = "measured";
+    } else {
+      // Two weighings (or a figure of unknown basis) that disagree: judge on the heavier, the safe side.
+      tw = Math.max(entered, twMeasured);
+      twSource = "larger";
+    }
+  }
+  const twNeed = hasTrailer && tw === undefined ? (twMeasureMissing.length ? twMeasureMissing.slice() : ["trailer.tongueWeight"]) : [];
   const band = v.tongueShareBand
     ? { min: v.tongueShareBand.min / 100, max: v.tongueShareBand.max / 100, source: "vehicle" as const }
     : { ...TONGUE_BANDS[t?.type ?? "other"], source: "trailer-type" as const };
@@ -110,12 +158,32 @@ export function derive(rig: RigInput): Derived {
   const loadedVehicle =
     weighedTotal ?? (curb !== undefined && occ !== undefined && cargo !== undefined ? curb + occ + cargo + hardware : undefined);
 
+  // Geometry: the ball sits the extender's length and the ball mount's length behind the pin hole.
+  const ext = rig.extender?.length ?? 0;
+  // An older input's rearAxleToHitch is the pin for an accessory (parseRig migrates it; this covers unparsed input).
+  const pin = v.rearAxleToPin ?? (hasAccessory || !hasTrailer ? v.rearAxleToHitch : undefined);
   let overhang: number | undefined;
-  if (v.rearAxleToHitch !== undefined) {
-    if (hasAccessory) {
-      overhang =
-        a!.loadCenterFromPin !== undefined ? v.rearAxleToHitch + (rig.extender?.length ?? 0) + a!.loadCenterFromPin : undefined;
-    } else overhang = v.rearAxleToHitch;
+  let overhangFrom: Derived["overhangFrom"];
+  const overhangNeed: string[] = [];
+  if (hasAccessory) {
+    if (pin === undefined) overhangNeed.push("vehicle.rearAxleToPin");
+    if (a!.loadCenterFromPin === undefined) overhangNeed.push("accessory.loadCenterFromPin");
+    if (pin !== undefined && a!.loadCenterFromPin !== undefined) {
+      overhang = pin + ext + a!.loadCenterFromPin;
+      overhangFrom = "pin";
+    }
+  } else if (hasTrailer) {
+    const len = rig.ballMount?.length;
+    if (pin !== undefined && len !== undefined) {
+      overhang = pin + ext + len;
+      overhangFrom = "pin";
+    } else if (v.rearAxleToHitch !== undefined && v.rearAxleToPin === undefined) {
+      overhang = v.rearAxleToHitch;
+      overhangFrom = "ball-as-measured";
+    } else {
+      if (pin === undefined) overhangNeed.push("vehicle.rearAxleToPin");
+      if (len === undefined) overhangNeed.push("ballMount.length");
+    }
   }
 
   return {
@@ -126,8 +194,11 @@ export function derive(rig: RigInput): Derived {
     gtw: t?.grossTrailerWeight,
     tw,
     twEstimated,
+    twSource,
     twMeasured,
     twMethod,
+    twMeasureMissing,
+    twNeed,
     band,
     hitchLoad,
     hitchLoadEstimated: twEstimated,
@@ -138,7 +209,31 @@ export function derive(rig: RigInput): Derived {
     payloadSource,
     weighedTotal,
     loadedVehicle,
+    pin,
     overhang,
+    overhangFrom,
+    overhangNeed,
     cache: {},
   };
+}
+
+/** What the checks must still be given to know the tongue weight (the missing beam distance, or the figure itself). */
+export function needTongueWeight(d: Derived): MissingField[] {
+  return d.twNeed.map(need);
+}
+
+/** One sentence every check that uses the tongue weight carries: which figure it judges on, and why. */
+export function tongueWeightNote(d: Derived, c: Ctx): string | undefined {
+  const t = d.rig.trailer;
+  if (!t || d.tw === undefined) return undefined;
+  const entered = t.tongueWeight;
+  if (d.twSource === "larger" && entered !== undefined && d.twMeasured !== undefined)
+    return `The entered tongue weight (${fW(c, entered)}) and the measurement (${fW(c, d.twMeasured)}) disagree: the checks use the larger, ${fW(c, d.tw)}, until it is weighed again.`;
+  if (d.twSource === "measured" && entered !== undefined && t.tongueWeightBasis === "estimated")
+    return `The checks use the measured tongue weight (${fW(c, d.tw)}), not the ${fW(c, entered)} estimate entered.`;
+  if (d.twSource === "entered" && d.twEstimated)
+    return t.tongueWeightBasis === "estimated"
+      ? `The tongue weight of ${fW(c, d.tw)} is an estimate; weigh it to be sure.`
+      : `The tongue weight of ${fW(c, d.tw)} was not marked as weighed, so it is taken as an estimate; weigh it to be sure.`;
+  return undefined;
 }

@@ -92,6 +92,8 @@ export function evaluateRigFast(input: RigInput, options?: EvaluateOptions): Fas
     levelFromCheckedOnly: verdict.levelFromCheckedOnly,
     complete: verdict.complete,
     incomplete: verdict.incomplete,
+    adjust: verdict.adjust,
+    over: verdict.over,
     governing: verdict.governing,
     checks: summary,
   };

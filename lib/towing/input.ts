@@ -105,7 +105,12 @@ function rigShape<U extends UnitSystem>(units: U) {
       axleWeights: axlePair("vehicle.axleWeights", "Weighed axle load, unhitched and loaded"),
       axleWeightsHitched: axlePair("vehicle.axleWeightsHitched", "Weighed axle load, hitched"),
       wheelbase: l("vehicle.wheelbase", "Wheelbase", 40, 300),
-      rearAxleToHitch: l("vehicle.rearAxleToHitch", "Rear axle to ball (or pin)", 10, 200),
+      rearAxleToPin: l("vehicle.rearAxleToPin", "Rear axle to receiver pin hole", 10, 200),
+      /**
+       * Older inputs: rear axle to the ball as measured (to the pin for an accessory). parseRig turns it into
+       * rearAxleToPin where it can; a trailer rig whose ball mount length is unknown keeps it as the ball's figure.
+       */
+      rearAxleToHitch: l("vehicle.rearAxleToHitch", "Rear axle to ball (older inputs)", 10, 200),
       wdRequiredAbove: m("vehicle.wdRequiredAbove", "Weight distribution required above", 0, 40000),
       departureAngle: field(units, "vehicle.departureAngle", "Departure angle", "angle", 1, 60),
       tongueShareBand: z
@@ -167,6 +172,7 @@ function rigShape<U extends UnitSystem>(units: U) {
     extender: z
       .object({
         length: req(l("extender.length", "Extender length", 0, 24)),
+        gtwRating: m("extender.gtwRating", "Extender gross trailer weight rating", 0, 40000),
         twRating: m("extender.twRating", "Extender tongue weight rating", 0, 6000),
       })
       .optional(),
@@ -218,6 +224,19 @@ export const rigInputSchema = z
         message: "A rig carries a trailer or a hitch-mounted accessory, not both at once.",
       });
     }
+    // The tongue carries part of the trailer, never more than all of it: a larger figure is a misreading.
+    const t = rig.trailer;
+    const gtw = t?.grossTrailerWeight;
+    if (t && gtw !== undefined) {
+      if (t.tongueWeight !== undefined && t.tongueWeight > gtw)
+        ctx.addIssue({ code: "custom", path: ["trailer", "tongueWeight"], message: "Tongue weight cannot be more than the gross trailer weight: check both figures." });
+      const m = t.tongueMeasurement;
+      if (m) {
+        const measured = m.blockToJack !== undefined && m.jackToScale !== undefined ? (m.scaleReading * (m.blockToJack + m.jackToScale)) / m.blockToJack : m.scaleReading;
+        if (measured > gtw * (1 + 1e-9))
+          ctx.addIssue({ code: "custom", path: ["trailer", "tongueMeasurement", "scaleReading"], message: "The measured tongue weight comes out more than the gross trailer weight: check the reading and the distances." });
+      }
+    }
   });
 
 /** A validated rig (the schema's output). */
@@ -256,9 +275,37 @@ function ownWords(path: PropertyKey[], message: string, code: string): string {
   return `${section} is not valid here.`;
 }
 
+type Plain = Record<string, unknown>;
+const isPlain = (v: unknown): v is Plain => typeof v === "object" && v !== null && !Array.isArray(v);
+
+/**
+ * Older inputs gave `vehicle.rearAxleToHitch`: the rear axle to the ball for a trailer, to the pin for an
+ * accessory. The one figure measured now is the rear axle to the receiver pin hole (`rearAxleToPin`); the ball
+ * is reached by adding the extender and the ball mount's length. Turn the old figure into the new one where the
+ * geometry allows (Geometry: pin = ball − ball mount length − extender length); a trailer rig whose ball mount
+ * length is unknown keeps the old figure, read as the ball's position as measured.
+ */
+export function migrateRigInput(value: unknown): unknown {
+  if (!isPlain(value) || !isPlain(value.vehicle)) return value;
+  const v = value.vehicle;
+  if (typeof v.rearAxleToHitch !== "number" || v.rearAxleToPin !== undefined) return value;
+  const old = v.rearAxleToHitch;
+  const { rearAxleToHitch: _old, ...vehicle } = v;
+  void _old;
+  if (!isPlain(value.trailer)) return { ...value, vehicle: { ...vehicle, rearAxleToPin: old } };
+  const len = isPlain(value.ballMount) ? value.ballMount.length : undefined;
+  const ext = isPlain(value.extender) && typeof value.extender.length === "number" ? value.extender.length : 0;
+  if (typeof len !== "number") return value;
+  const pin = old - len - ext;
+  const range = FIELD_RANGES["vehicle.rearAxleToPin"]!;
+  const s = value.units === "metric" ? MM_PER_IN : 1;
+  if (!(pin >= range.min * s && pin <= range.max * s)) return value;
+  return { ...value, vehicle: { ...vehicle, rearAxleToPin: pin } };
+}
+
 /** Validate unknown input (a form, a request body, a file). Never throws; error keys are dotted paths. */
 export function parseRig(value: unknown): ParseRigResult {
-  const parsed = rigInputSchema.safeParse(value);
+  const parsed = rigInputSchema.safeParse(migrateRigInput(value));
   if (parsed.success) return { ok: true, rig: parsed.data };
   const fieldErrors: Record<string, string[]> = {};
   for (const issue of parsed.error.issues) {

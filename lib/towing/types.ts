@@ -1,8 +1,21 @@
 /** Result types of the core. Every number is unrounded, finite, and in the rig's own unit system. */
 import type { UnitString, UnitSystem } from "./units";
 
-export type CheckStatus = "within" | "tight" | "over" | "incomplete";
-export type VerdictLevel = "within" | "tight" | "over";
+/**
+ * A check's status. `over`: a rating is exceeded (do not tow). `adjust`: the set-up needs changing before the
+ * rig tows (a ball mount's drop, spring bars to re-set, a raised shank, the trailer's load to move); no rating is
+ * exceeded. `tight`: within, with less room than the organisation's threshold (or a common-practice caution).
+ * `incomplete`: a figure it needs is missing. Severity: over > incomplete > adjust > tight > within.
+ */
+export type CheckStatus = "within" | "tight" | "adjust" | "over" | "incomplete";
+/**
+ * The rig's level. `incomplete` ("not confirmed"): no rating is exceeded and nothing is known to need adjusting
+ * on the checks with data, but some checks lack data (or none has any): never read as within or tight.
+ */
+export type VerdictLevel = "within" | "tight" | "adjust" | "over" | "incomplete";
+
+/** Every status from the least to the most severe, as the verdict ranks them. */
+export const STATUS_ORDER = ["within", "tight", "adjust", "incomplete", "over"] as const;
 
 export const CHECK_IDS = [
   "weakest-link",
@@ -186,13 +199,20 @@ export interface VerdictAction {
 export interface VerdictResult {
   id: "verdict";
   title: string;
-  /** Worst of the checks with data, raised to at least "tight" when any check is incomplete. */
+  /**
+   * over when any check is over; else incomplete when any check lacks data (or none has any); else adjust when
+   * any check is adjust; else the worst of tight and within.
+   */
   level: VerdictLevel;
-  /** Worst of the checks with data only. */
+  /** Worst of the checks with data only ("incomplete" only when no check has data). */
   levelFromCheckedOnly: VerdictLevel;
   /** False when any check lacks data. */
   complete: boolean;
   incomplete: CheckId[];
+  /** The checks whose set-up needs adjusting (status "adjust"), whatever the level. */
+  adjust: CheckId[];
+  /** The checks with a rating exceeded (status "over"). */
+  over: CheckId[];
   message: string;
   /** The check and item with the least margin. */
   governing?: Governing & { checkId: CheckId };
@@ -256,6 +276,8 @@ export interface FastRigResult {
   levelFromCheckedOnly: VerdictLevel;
   complete: boolean;
   incomplete: CheckId[];
+  adjust: CheckId[];
+  over: CheckId[];
   governing?: Governing & { checkId: CheckId };
   checks: FastCheck[];
 }

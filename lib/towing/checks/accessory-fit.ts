@@ -8,9 +8,10 @@
  * - Ground: height and angle of its lowest point; the angle against the vehicle's departure angle
  *   (Source: 49 CFR 523.2 for the definition; the angle is geometry: atan(h / d)).
  */
-import { EPS, fA, fL, fW, iL, iN, iW, lessThan, marginL, marginW, NO_STEPS, NO_TEXT, qL, qW, ratioOf, rL, rN, rW, statusOf, worst, type Ctx } from "../context";
+import { EPS, fA, fL, fW, iL, iN, iW, lessThan, rankOf, marginL, marginW, NO_STEPS, NO_TEXT, qL, qW, ratioOf, rL, rN, rW, statusOf, worst, type Ctx } from "../context";
 import type { Derived } from "../derive";
 import { need } from "../missing";
+import { EXTENDER_CAUTIONS } from "./weakest-link";
 import type { AccessoryFitResult, CheckStatus, Margin, MissingField, Quantity, Step } from "../types";
 
 /** A receiver whose top is about 12 in from the ground calls for a raised shank. Common practice, no published source. */
@@ -45,23 +46,33 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
   else missing.push(need("vehicle.tongueWeightLimit"));
   if (h?.twRating !== undefined) limits.push(["hitch.twRating", "Hitch tongue rating", h.twRating]);
   else missing.push(need("hitch.twRating"));
+  // The extender's label already allows for its own length: it is compared with the plain load, never derated again.
   if (rig.extender?.twRating !== undefined) limits.push(["extender.twRating", "Extender tongue rating", rig.extender.twRating]);
+  else if (rig.extender) missing.push(need("extender.twRating"));
+  let lowVh: [string, string, number] | undefined;
+  for (const l of limits) if (l[0] !== "extender.twRating" && (!lowVh || lessThan(l[2], lowVh[2]))) lowVh = l;
   if (a.weight === undefined) missing.push(need("accessory.weight"));
   if (a.loadWeight === undefined) missing.push(need("accessory.loadWeight"));
   if (a.loadCenterFromPin === undefined) missing.push(need("accessory.loadCenterFromPin"));
   let low: [string, string, number] | undefined;
   for (const l of limits) if (!low || lessThan(l[2], low[2])) low = l;
   const loadPart: Part = { id: "load", label: "Load on the receiver", status: "incomplete" };
+  let leverBeyond = false;
   if (d.hitchLoad !== undefined && a.loadCenterFromPin !== undefined) {
     const w = d.hitchLoad;
     const arm = a.loadCenterFromPin + ext;
     const factor = Math.max(1, arm / c.referenceArm);
     const eq = w * factor;
-    loadPart.actual = qW(c, eq);
+    loadPart.actual = qW(c, w);
     if (low) {
+      // The ratings decide "over" on the load itself. The lever effect is a convention (the reference arm has no
+      // published source): beyond the vehicle's or hitch's rating it makes the part tight, never over.
       loadPart.limit = qW(c, low[2]);
-      loadPart.margin = marginW(c, eq, low[2]);
-      loadPart.status = statusOf(eq, low[2], c.tight);
+      loadPart.margin = marginW(c, w, low[2]);
+      const byRating = statusOf(w, low[2], c.tight);
+      const byLever = lowVh ? statusOf(eq, lowVh[2], c.tight, "tight") : "within";
+      loadPart.status = worst([byRating, byLever]);
+      leverBeyond = byRating !== "over" && !!lowVh && eq > lowVh[2] * (1 + 1e-9);
     }
     if (detail)
       steps.push(
@@ -81,10 +92,20 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
       steps.push({
         id: "accessory-capacity",
         title: "Room left on the tongue capacity",
-        formulaWords: "Lowest tongue rating minus the equivalent load",
-        formula: limits.length > 1 ? `min(${limits.map((_, i) => `T_${i + 1}`).join(", ")}) - W_eq` : "T_1 - W_eq",
-        inputs: [...limits.map((l, i) => iW(c, `T_${i + 1}`, l[1], l[2])), iW(c, "W_eq", "Equivalent load", eq)],
-        result: rW(c, "M_T", low[2] - eq),
+        formulaWords: "Lowest tongue rating minus the weight on the receiver",
+        formula: limits.length > 1 ? `min(${limits.map((_, i) => `T_${i + 1}`).join(", ")}) - W` : "T_1 - W",
+        inputs: [...limits.map((l, i) => iW(c, `T_${i + 1}`, l[1], l[2])), iW(c, "W", "Weight on the receiver", w)],
+        result: rW(c, "M_T", low[2] - w),
+      });
+    if (detail && lowVh)
+      steps.push({
+        id: "accessory-lever-allowance",
+        title: "Room left for the lever effect",
+        formulaWords: "The vehicle's or hitch's lowest tongue rating minus the equivalent load (a caution at most)",
+        formula: "T_vh - W_eq",
+        inputs: [iW(c, "T_vh", lowVh[1], lowVh[2]), iW(c, "W_eq", "Equivalent load", eq)],
+        result: rW(c, "M_lever", lowVh[2] - eq),
+        note: "Common practice, no published source: beyond it the check reads tight, never over.",
       });
   }
   parts.push(loadPart);
@@ -100,7 +121,8 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
       foldPart.actual = qL(c, a.foldClearance);
       foldPart.limit = qL(c, room);
       foldPart.margin = marginL(c, a.foldClearance, room);
-      foldPart.status = statusOf(a.foldClearance, room, c.tight);
+      // Not folding clear of the bumper is a fit to change (another accessory or a short extender), not a rating.
+      foldPart.status = statusOf(a.foldClearance, room, c.tight, "adjust");
       if (detail)
         steps.push({
           id: "fold-room",
@@ -135,15 +157,16 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
         result: rL(c, "h", ground),
       });
     if (ground <= EPS) {
-      groundPart.status = "over";
+      // A raised shank is needed: a set-up to adjust.
+      groundPart.status = "adjust";
       groundPart.actual = qL(c, ground);
       groundPart.limit = qL(c, 0);
     } else {
-      if (v.rearAxleToHitch === undefined) missing.push(need("vehicle.rearAxleToHitch"));
+      if (d.pin === undefined) missing.push(need("vehicle.rearAxleToPin"));
       if (a.lowestPointBehindPin === undefined) missing.push(need("accessory.lowestPointBehindPin"));
       if (v.departureAngle === undefined) missing.push(need("vehicle.departureAngle"));
-      if (v.rearAxleToHitch !== undefined && a.lowestPointBehindPin !== undefined) {
-        const dist = v.rearAxleToHitch + ext + a.lowestPointBehindPin;
+      if (d.pin !== undefined && a.lowestPointBehindPin !== undefined) {
+        const dist = d.pin + ext + a.lowestPointBehindPin;
         angle = Math.atan2(ground, dist) * RAD;
         if (detail)
           steps.push({
@@ -159,7 +182,8 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
           groundPart.actual = { value: target, unit: "°" };
           groundPart.limit = { value: angle, unit: "°" };
           groundPart.margin = { value: angle - target, unit: "°", ratio: ratioOf(target, angle) };
-          groundPart.status = statusOf(target, angle, c.tight);
+          // Below the vehicle's own departure angle: a raised shank or another accessory, a set-up to adjust.
+          groundPart.status = statusOf(target, angle, c.tight, "adjust");
           const needH = dist * Math.tan(target / RAD);
           riseNeeded = Math.max(0, needH - ground);
           if (detail)
@@ -182,7 +206,13 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
   if (status !== "over" && missing.length) status = "incomplete";
   let gov: Part | undefined;
   let best = Infinity;
-  for (const p of parts) if (p.margin && lessThan(p.margin.ratio, best)) (best = p.margin.ratio), (gov = p);
+  // The part shown is the most severe, then the one with the least room, so the badge and the figures agree.
+  let govRank = -1;
+  for (const p of parts) {
+    if (!p.margin) continue;
+    const r = rankOf(p.status);
+    if (r > govRank || (r === govRank && lessThan(p.margin.ratio, best))) (govRank = r), (best = p.margin.ratio), (gov = p);
+  }
   const result: AccessoryFitResult = {
     id: "accessory-fit",
     title: "Accessory fit",
@@ -211,18 +241,23 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
   if (!detail) return result;
   result.steps = steps;
   const cautions = CAUTIONS.slice();
+  if (rig.extender) cautions.push(...EXTENDER_CAUTIONS(false));
   const advice: string[] = [];
+  if (leverBeyond)
+    cautions.push(
+      `Its moment about the pin is more than the ${fL(c, c.referenceArm)} reference arm allows for: the load counts as about ${fW(c, (d.hitchLoad ?? 0) * Math.max(1, ((a.loadCenterFromPin ?? 0) + ext) / c.referenceArm))} against the ratings. The reference arm is common practice, no published source: the accessory's and the hitch's own instructions decide.`,
+    );
   if (recv !== undefined && recv <= LOW_RECEIVER_IN + EPS)
     advice.push(`The receiver sits low (${fL(c, recv)} from the ground): a raised shank keeps the accessory clear of driveways and ramps.`);
-  if (loadPart.status === "over")
+  if (loadPart.status === "over" || leverBeyond)
     advice.push(
       ext > 0
         ? "Carry less on the accessory, bring the load closer to the vehicle, or do without the extender."
         : "Carry less on the accessory, or bring the load closer to the vehicle.",
     );
   const foldPart = parts.find((p) => p.id === "fold");
-  if (foldPart?.status === "over") advice.push("The accessory will hit the bumper when folded: choose one that folds in the room available, or fit a short extender if its rating allows.");
-  if (groundPart.status === "over" && ground !== undefined && ground <= EPS) advice.push("The accessory's lowest point would touch the ground: fit a raised shank.");
+  if (foldPart?.status === "adjust") advice.push("The accessory will hit the bumper when folded: choose one that folds in the room available, or fit a short extender if its rating allows.");
+  if (groundPart.status === "adjust" && ground !== undefined && ground <= EPS) advice.push("The accessory's lowest point would touch the ground: fit a raised shank.");
   else if (riseNeeded !== undefined && riseNeeded > EPS)
     advice.push(`Add about ${fL(c, riseNeeded)} of shank rise to keep the vehicle's ${fA(v.departureAngle!)} departure angle.`);
   for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
@@ -230,7 +265,9 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
   result.cautions = cautions;
   result.message =
     status === "over"
-      ? `The accessory does not fit as set up: ${parts.filter((p) => p.status === "over").map((p) => p.label.toLowerCase()).join(" and ")}.`
+      ? `A rating is exceeded: ${fW(c, d.hitchLoad ?? 0)} on the receiver, more than the ${low ? low[1].toLowerCase() : "rating"} of ${low ? fW(c, low[2]) : "?"}.`
+      : status === "adjust"
+        ? `The accessory needs a different set-up: ${parts.filter((p) => p.status === "adjust").map((p) => p.label.toLowerCase()).join(" and ")}.`
       : status === "incomplete"
         ? "Some measurements are missing to check the accessory's fit."
         : status === "tight"

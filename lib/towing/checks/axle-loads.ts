@@ -3,8 +3,8 @@
  * a vehicle with wheelbase WB lifts P·OH/WB off the front axle and puts P·(WB + OH)/WB on the rear axle.
  * Each axle is compared with its GAWR; the front axle with the larger of its unhitched and hitched loads.
  */
-import { fP, fW, govW, iL, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
-import type { Derived } from "../derive";
+import { fP, fW, govW, iL, iN, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, ratioOf, rL, rW, statusOf, withMissing, worst, type Ctx } from "../context";
+import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
 import { need } from "../missing";
 import type { AxleLoadsResult, CheckStatus, MissingField, Step } from "../types";
 import { axlesWithWd, wdState } from "./weight-distribution";
@@ -13,6 +13,30 @@ import { axlesWithWd, wdState } from "./weight-distribution";
 export function axleLoadChange(p: number, wheelbase: number, overhang: number) {
   return { front: (-p * overhang) / wheelbase, rear: (p * (wheelbase + overhang)) / wheelbase };
 }
+
+/**
+ * Rear axle load gained per unit of tongue weight, in the one state the axle check and the envelope both use:
+ * with weight distribution at restoration `r` (Statics: 1 + (1 − r) · OH / WB); without it, from the hitched
+ * weighing when there is one ((R_h − R_0) / TW), else statics ((WB + OH) / WB). Undefined when it cannot be known.
+ */
+export function rearGainPerTongue(d: Derived, r: number | undefined): number | undefined {
+  const v = d.rig.vehicle;
+  const aw = v.axleWeights;
+  if (d.wdUsed) {
+    if (v.wheelbase === undefined || d.overhang === undefined || r === undefined) return undefined;
+    return 1 + ((1 - r) * d.overhang) / v.wheelbase;
+  }
+  const awh = d.hasTrailer ? v.axleWeightsHitched : undefined;
+  if (aw && awh && d.tw !== undefined && d.tw >= MIN_SCALED_TONGUE_LB && awh.rear - aw.rear > 0) return (awh.rear - aw.rear) / d.tw;
+  if (v.wheelbase === undefined || d.overhang === undefined) return undefined;
+  return (v.wheelbase + d.overhang) / v.wheelbase;
+}
+
+/** Below this tongue weight (lb) a hitched weighing's gain is not scaled per unit of tongue weight: statics instead. */
+const MIN_SCALED_TONGUE_LB = 1;
+
+/** With weight distribution and no measured restoration, the rear axle lies between these two restorations. */
+export const UNMEASURED_RESTORATION = { heaviest: 0, lightest: 1 } as const;
 
 const CAUTIONS = [
   "Weight on the hitch lifts the front of the vehicle: the front tyres steer and brake with less grip.",
@@ -25,10 +49,15 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
   const v = rig.vehicle;
   const missing: MissingField[] = [];
   const p = d.hitchLoad;
-  if (p === undefined) missing.push(need(d.hasTrailer ? "trailer.tongueWeight" : "accessory.weight"));
+  if (p === undefined) {
+    if (d.hasTrailer) missing.push(...needTongueWeight(d));
+    else {
+      if (rig.accessory!.weight === undefined) missing.push(need("accessory.weight"));
+      if (rig.accessory!.loadWeight === undefined) missing.push(need("accessory.loadWeight"));
+    }
+  }
   if (v.wheelbase === undefined) missing.push(need("vehicle.wheelbase"));
-  if (v.rearAxleToHitch === undefined) missing.push(need("vehicle.rearAxleToHitch"));
-  if (d.hasAccessory && rig.accessory!.loadCenterFromPin === undefined) missing.push(need("accessory.loadCenterFromPin"));
+  for (const f of d.overhangNeed) missing.push(need(f));
   if (!v.axleWeights) missing.push(need("vehicle.axleWeights"));
   if (v.gawrFront === undefined) missing.push(need("vehicle.gawrFront"));
   if (v.gawrRear === undefined) missing.push(need("vehicle.gawrRear"));
@@ -52,6 +81,15 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
     result.rearChange = qW(c, change.rear);
     if (c.detail) {
       const ohLabel = d.hasAccessory ? "Rear axle to the load's centre" : "Rear axle to ball";
+      if (!d.hasAccessory && d.overhangFrom === "pin")
+        steps.push({
+          id: "overhang",
+          title: "Rear axle to the ball",
+          formulaWords: "Rear axle to the receiver pin hole, plus the extender, plus the ball mount's length",
+          formula: "P + e + L_mount",
+          inputs: [iL(c, "P", "Rear axle to pin hole", d.pin!), iL(c, "e", "Extender", rig.extender?.length ?? 0), iL(c, "L_mount", "Ball mount length", rig.ballMount!.length!)],
+          result: rL(c, "OH", d.overhang),
+        });
       steps.push(
         {
           id: "front-change",
@@ -95,12 +133,34 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
         );
       let frontDriven = front;
       let rearDriven = rear;
+      // With weight distribution and no fender heights, the restoration is not known: the rear axle lies between
+      // its load with the bars released (the heaviest) and with all the lost load given back (the lightest).
+      let rearLightest: number | undefined;
       if (d.wdUsed && p !== undefined && v.wheelbase !== undefined && d.overhang !== undefined) {
         const s = wdState(d);
-        const w = axlesWithWd(aw.front, aw.rear, p, v.wheelbase, d.overhang, s.restorationUsed ?? s.target);
-        result.withWd = { front: qW(c, w.front), rear: qW(c, w.rear) };
-        frontDriven = w.front;
-        rearDriven = w.rear;
+        const shown = axlesWithWd(aw.front, aw.rear, p, v.wheelbase, d.overhang, s.restorationUsed ?? s.target);
+        result.withWd = { front: qW(c, shown.front), rear: qW(c, shown.rear) };
+        if (s.restoration !== undefined) {
+          frontDriven = shown.front;
+          rearDriven = shown.rear;
+        } else {
+          result.estimated = true;
+          const heavy = axlesWithWd(aw.front, aw.rear, p, v.wheelbase, d.overhang, UNMEASURED_RESTORATION.heaviest);
+          const light = axlesWithWd(aw.front, aw.rear, p, v.wheelbase, d.overhang, UNMEASURED_RESTORATION.lightest);
+          frontDriven = Math.max(heavy.front, light.front);
+          rearDriven = heavy.rear;
+          rearLightest = light.rear;
+          if (c.detail)
+            steps.push({
+              id: "rear-unmeasured-wd",
+              title: "Rear axle until the fender heights are measured",
+              formulaWords: "Rear axle with the weight distribution released, the heaviest it can be",
+              formula: "R_0 + TW * (WB + OH) / WB",
+              inputs: [iW(c, "R_0", "Rear axle unhitched", aw.rear), iW(c, "TW", "Tongue weight", p), iL(c, "OH", "Rear axle to ball", d.overhang), iL(c, "WB", "Wheelbase", v.wheelbase)],
+              result: rW(c, "R_max", heavy.rear),
+              note: `The load with weight distribution is an estimate at the ${Math.round(s.target * 100)} % target until the front fender heights are measured.`,
+            });
+        }
       }
       // The vehicle also drives unhitched, so the front axle answers for the larger of the two.
       const frontWorst = Math.max(aw.front, front, frontDriven);
@@ -111,7 +171,15 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
       ];
       for (const [id, lab, actual, limit] of axles) {
         if (limit === undefined) continue;
-        statuses.push(statusOf(actual, limit, c.tight));
+        let st = statusOf(actual, limit, c.tight);
+        // Over only if it is over even at the lightest the restoration could make it; otherwise measure.
+        if (st === "over" && id === "vehicle.gawrRear" && rearLightest !== undefined && statusOf(rearLightest, limit, c.tight) !== "over") {
+          st = "incomplete";
+          for (const f of ["weightDistribution.fenderUnhitched", "weightDistribution.fenderHitched", "weightDistribution.fenderWithWd"] as const)
+            if (d.rig.weightDistribution?.[f.split(".")[1] as "fenderUnhitched"] === undefined) missing.push(need(f));
+          if (!missing.some((m) => m.field.startsWith("weightDistribution."))) missing.push(need("weightDistribution.fenderWithWd"));
+        }
+        statuses.push(st);
         const ratio = ratioOf(actual, limit);
         if (lessThan(ratio, bestRatio)) {
           bestRatio = ratio;
@@ -130,13 +198,22 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
   const cautions = CAUTIONS.slice();
   if (change && aw && aw.front > 0)
     cautions.push(`Hitched, the front axle carries ${fW(c, -change.front)} (${fP(-change.front / aw.front)}) less than unhitched.`);
-  if (d.wdUsed) cautions.push("The axle loads compared with the GAWRs are those with weight distribution engaged, as driven.");
+  if (d.wdUsed)
+    cautions.push(
+      wdState(d).restoration !== undefined
+        ? "The axle loads compared with the GAWRs are those with weight distribution engaged, as driven."
+        : "The restoration is not measured yet: the rear axle is compared with the bars released (the heaviest it can be), and the loads with weight distribution are estimates. Measure the front fender height unhitched, hitched, and hitched with weight distribution.",
+    );
+  const note = tongueWeightNote(d, c);
+  if (note) cautions.push(note);
+  if (d.overhangFrom === "ball-as-measured") cautions.push("Rear axle to ball taken from the figure as measured on the rig; record the rear axle to the receiver pin hole and the ball mount's length instead.");
   result.cautions = cautions;
   const advice: string[] = [];
   if (result.status === "over" && result.governing?.id === "vehicle.gawrRear")
     advice.push("Lighten the tongue, move cargo forward in the vehicle, or use weight distribution to move load off the rear axle.");
   if (result.status === "over" && result.governing?.id === "vehicle.gawrFront") advice.push("Move cargo off the front of the vehicle or back towards the rear axle.");
   if (result.status === "tight") advice.push("An axle is close to its rating: weigh each axle at a public scale, hitched.");
+  if (result.estimated && d.wdUsed) advice.push("Measure the front fender height unhitched, hitched with the bars released, and hitched with the bars on: the loads with weight distribution are estimates until then.");
   for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
   result.advice = advice;
   const g = result.governing;

@@ -72,7 +72,8 @@ export function checkBallMount(d: Derived, c: Ctx): BallMountResult | null {
       result.limit = qL(c, LEVEL_TOLERANCE_IN);
       result.margin = marginL(c, off, LEVEL_TOLERANCE_IN);
       result.governing = { id: "level.tolerance", label: "Off-level allowance at the coupler", value: qL(c, LEVEL_TOLERANCE_IN).value, unit: c.u.length };
-      result.status = statusOf(off, LEVEL_TOLERANCE_IN, c.tight);
+      // Off level is a set-up to adjust (a ball mount with another drop), never a rating exceeded.
+      result.status = statusOf(off, LEVEL_TOLERANCE_IN, c.tight, "adjust");
       if (c.detail)
         steps.push({
           id: "level-error",
@@ -90,8 +91,19 @@ export function checkBallMount(d: Derived, c: Ctx): BallMountResult | null {
   result.cautions = CAUTIONS;
   const advice: string[] = [];
   const word = (x: number) => wordFor(c, x);
-  if (needed !== undefined && (drop === undefined || !lessOrEqual(Math.abs(drop - needed), LEVEL_TOLERANCE_IN) || result.status === "tight"))
-    advice.push(`Use a ball mount with a ${word(nearestCommonDrop(needed))} (nearest common size).`);
+  if (needed !== undefined && (drop === undefined || !lessOrEqual(Math.abs(drop - needed), LEVEL_TOLERANCE_IN) || result.status === "tight")) {
+    // Advise only a size that this same check would pass; say so when no common size does.
+    const common = nearestCommonDrop(needed);
+    const commonStatus = statusOf(Math.abs(common - needed), LEVEL_TOLERANCE_IN, c.tight, "adjust");
+    if (commonStatus === "within" && (drop === undefined || Math.abs(common - drop) > 1e-9))
+      advice.push(`Use a ball mount with a ${word(common)} (nearest common size).`);
+    else if (commonStatus === "within")
+      advice.push(`A ${word(needed)} would level the trailer exactly; the ${word(common)} fitted is the nearest common size.`);
+    else
+      advice.push(
+        `No common ball mount levels this trailer: a ${word(needed)} is needed and the nearest common size, a ${word(common)}, still leaves it ${fL(c, Math.abs(common - needed))} off level. Use an adjustable ball mount, or change the coupler's or the receiver's height.`,
+      );
+  }
   for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
   result.advice = advice;
   result.message =

@@ -6,11 +6,13 @@
  *   s_min · G ≤ T ≤ s_max · G (the tongue-weight band).
  * Physics: the region is the intersection of half-planes; its corners are found in closed form.
  */
-import { EPS, fW, iL, iN, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, rW, statusOf, withMissing, worst, type Ctx } from "../context";
-import type { Derived } from "../derive";
+import { EPS, fW, iN, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, rankOf, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
+import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
 import { need } from "../missing";
 import type { CheckStatus, EnvelopeLine, EnvelopeResult, MissingField, Step } from "../types";
 import { ratingSet } from "./weakest-link";
+import { rearGainPerTongue, UNMEASURED_RESTORATION } from "./axle-loads";
+import { wdState } from "./weight-distribution";
 
 interface Bound {
   id: string;
@@ -54,17 +56,51 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
     if (c.detail)
       steps.push({ id: "payload-room", title: "Payload left for the tongue", formulaWords: "Payload capacity minus occupants, cargo and hitch hardware", formula: "P_cap - W_load", inputs: [iW(c, "P_cap", "Payload capacity (or GVWR)", payloadBase), iW(c, "W_load", "Already aboard", payloadBase - payloadRoom)], result: rW(c, "T_payload", payloadRoom) });
   }
-  // Rear GAWR
+  // Axles, in the same state as the axle-loads check: weight distribution at its measured restoration, else the
+  // rear axle between the bars released (the bound used here, the safe side) and all the lost load given back.
   const aw = v.axleWeights;
+  const s = d.wdUsed ? wdState(d) : undefined;
+  const rMeasured = s?.restoration;
+  let rearLightestBound: number | undefined;
   if (v.gawrRear === undefined) missing.push(need("vehicle.gawrRear"));
   else if (!aw) missing.push(need("vehicle.axleWeights"));
-  else if (v.wheelbase === undefined) missing.push(need("vehicle.wheelbase"));
-  else if (d.overhang === undefined) missing.push(need("vehicle.rearAxleToHitch"));
   else {
-    const t = ((v.gawrRear - aw.rear) * v.wheelbase) / (v.wheelbase + d.overhang);
-    bounds.push({ id: "vehicle.gawrRear", label: "Rear GAWR", on: "T", value: t });
-    if (c.detail)
-      steps.push({ id: "rear-axle-room", title: "Tongue weight the rear GAWR allows", formulaWords: "Room on the rear axle times wheelbase over (wheelbase plus overhang)", formula: "(GAWR_R - R_0) * WB / (WB + OH)", inputs: [iW(c, "GAWR_R", "Rear GAWR", v.gawrRear), iW(c, "R_0", "Rear axle unhitched", aw.rear), iL(c, "WB", "Wheelbase", v.wheelbase), iL(c, "OH", "Rear axle to ball", d.overhang)], result: rW(c, "T_axle", t), note: "Weight distribution released: the safe side." });
+    const rHeavy = d.wdUsed ? (rMeasured ?? UNMEASURED_RESTORATION.heaviest) : undefined;
+    const k = rearGainPerTongue(d, rHeavy);
+    if (k === undefined || !(k > 0)) {
+      if (v.wheelbase === undefined) missing.push(need("vehicle.wheelbase"));
+      for (const f of d.overhangNeed) missing.push(need(f));
+    } else {
+      const t = (v.gawrRear - aw.rear) / k;
+      bounds.push({ id: "vehicle.gawrRear", label: "Rear GAWR", on: "T", value: t });
+      if (d.wdUsed && rMeasured === undefined) {
+        const kLight = rearGainPerTongue(d, UNMEASURED_RESTORATION.lightest);
+        if (kLight !== undefined && kLight > 0) rearLightestBound = (v.gawrRear - aw.rear) / kLight;
+      }
+      if (c.detail)
+        steps.push({
+          id: "rear-axle-room",
+          title: "Tongue weight the rear GAWR allows",
+          formulaWords: "Room on the rear axle divided by the rear axle's gain per unit of tongue weight",
+          formula: "(GAWR_R - R_0) / k_R",
+          inputs: [iW(c, "GAWR_R", "Rear GAWR", v.gawrRear), iW(c, "R_0", "Rear axle unhitched", aw.rear), iN("k_R", "Rear axle gain per unit of tongue weight", k, "")],
+          result: rW(c, "T_axle", t),
+          note: d.wdUsed
+            ? rMeasured !== undefined
+              ? "With weight distribution at its measured restoration, as the axle-loads check: k_R = 1 + (1 − R) · OH / WB."
+              : "Weight distribution not measured yet: the bars taken released (the safe side), as the axle-loads check: k_R = (WB + OH) / WB."
+            : v.axleWeightsHitched && d.tw
+              ? "From the hitched weighing, as the axle-loads check: k_R = (R_hitched − R_0) / TW."
+              : "Statics, as the axle-loads check: k_R = (WB + OH) / WB.",
+        });
+    }
+  }
+  // The front axle: over already unhitched leaves no trailer; with more than all of the lost load given back,
+  // the front gains (R − 1) · OH / WB per unit of tongue weight.
+  if (aw && v.gawrFront !== undefined) {
+    if (aw.front > v.gawrFront * (1 + 1e-9)) bounds.push({ id: "vehicle.gawrFront", label: "Front GAWR (over before hitching)", on: "T", value: 0 });
+    else if (rMeasured !== undefined && rMeasured > 1 && v.wheelbase !== undefined && d.overhang !== undefined)
+      bounds.push({ id: "vehicle.gawrFront", label: "Front GAWR", on: "T", value: (v.gawrFront - aw.front) / (((rMeasured - 1) * d.overhang) / v.wheelbase) });
   }
 
   let gMax = Infinity;
@@ -100,6 +136,7 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
   }
 
   const statuses: CheckStatus[] = [];
+  let exceeded: Array<[Bound, number]> = [];
   if (gBound && tBound) {
     // Largest G: the GTW limit, or where the lowest share meets the TW limit.
     const gx = Math.max(0, Math.min(gMax, tMax / lo));
@@ -146,15 +183,43 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
         result: rW(c, "T_max", tx),
       });
     }
-    if (d.gtw !== undefined) {
-      statuses.push(statusOf(d.gtw, gx, c.tight));
-      result.actual = qW(c, d.gtw);
-      result.limit = qW(c, gx);
-      result.margin = marginW(c, d.gtw, gx);
-      result.governing = { id: (byBand ? tBound : gBound).id, label: (byBand ? tBound : gBound).label, value: (byBand ? tMax : gMax) * wf, unit: c.u.weight };
+    // The trailer against the largest gross weight and the largest tongue weight: the badge and the figures
+    // shown come from the same comparison, the one with the least room.
+    const parts: Array<{ on: "G" | "T"; actual: number; limit: number; status: CheckStatus }> = [];
+    if (d.gtw !== undefined) parts.push({ on: "G", actual: d.gtw, limit: gx, status: statusOf(d.gtw, gx, c.tight) });
+    if (d.tw !== undefined) {
+      let st = statusOf(d.tw, tx, c.tight);
+      // Over the rear-axle bound with the bars released, but not with all the load given back: measure first.
+      if (st === "over" && rearLightestBound !== undefined && tBound?.id === "vehicle.gawrRear" && d.tw <= Math.min(rearLightestBound, hi * gx) * (1 + 1e-9)) {
+        const otherT = bounds.filter((b) => b.on === "T" && b.id !== "vehicle.gawrRear").reduce((m, b) => Math.min(m, b.value), Infinity);
+        if (d.tw <= otherT * (1 + 1e-9)) {
+          st = "incomplete";
+          missing.push(need("weightDistribution.fenderWithWd"));
+        }
+      }
+      parts.push({ on: "T", actual: d.tw, limit: tx, status: st });
     }
-    if (d.tw !== undefined) statuses.push(statusOf(d.tw, tx, c.tight));
-    if (d.hasTrailer && (d.gtw === undefined || d.tw === undefined)) missing.push(need(d.gtw === undefined ? "trailer.grossTrailerWeight" : "trailer.tongueWeight"));
+    let shown: (typeof parts)[number] | undefined;
+    for (const p of parts) {
+      statuses.push(p.status);
+      const r = ratioOf(p.actual, p.limit);
+      if (!shown || rankOf(p.status) > rankOf(shown.status) || (rankOf(p.status) === rankOf(shown.status) && lessThan(r, ratioOf(shown.actual, shown.limit)))) shown = p;
+    }
+    if (shown) {
+      result.actual = qW(c, shown.actual);
+      result.limit = qW(c, shown.limit);
+      result.margin = marginW(c, shown.actual, shown.limit);
+      const b = shown.on === "G" ? (byBand ? tBound : gBound) : tBound;
+      const bv = shown.on === "G" ? (byBand ? tMax : gMax) : tMax;
+      result.governing = { id: b.id, label: b.label, value: bv * wf, unit: c.u.weight };
+      exceeded = [];
+      if (d.gtw !== undefined) for (const bd of bounds) if (bd.on === "G" && d.gtw > bd.value * (1 + 1e-9)) exceeded.push([bd, d.gtw]);
+      if (d.tw !== undefined) for (const bd of bounds) if (bd.on === "T" && d.tw > bd.value * (1 + 1e-9)) exceeded.push([bd, d.tw]);
+      if (d.gtw !== undefined && byBand && d.gtw > gx * (1 + 1e-9) && !exceeded.length) exceeded.push([{ id: "band.min", label: `Tongue limit at the lowest share (${tBound.label.toLowerCase()})`, on: "G", value: gx }, d.gtw]);
+    }
+    // With nothing hitched, or a trailer not yet weighed, the envelope is an answer but not a check.
+    if (d.gtw === undefined) missing.push(need("trailer.grossTrailerWeight"));
+    if (d.hasTrailer && d.tw === undefined) missing.push(...needTongueWeight(d));
     // Room left in the vehicle with this trailer on.
     const roomParts: number[] = [];
     if (payloadRoom !== undefined) roomParts.push(payloadRoom - (d.tw ?? 0));
@@ -172,12 +237,26 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
     "The envelope holds for the vehicle loaded as entered: more people or cargo shrink it.",
     "A trailer inside the envelope still needs its tongue weight inside the band and its own ratings respected.",
   ];
+  const note = tongueWeightNote(d, c);
+  if (note) result.cautions.push(note);
+  if (d.wdUsed && rMeasured === undefined) result.cautions.push("The restoration is not measured yet: the rear axle is taken with the bars released, so the envelope may be larger once the fender heights are measured.");
   const advice: string[] = [];
   if (result.status === "over") advice.push(`Choose a trailer no heavier than ${fW(c, result.maxGrossTrailerWeight?.value !== undefined ? result.maxGrossTrailerWeight.value / wf : 0)} loaded, with a tongue weight no more than ${fW(c, (result.maxTongueWeight?.value ?? 0) / wf)}.`);
   for (const m of result.missing ?? []) advice.push(`${m.what}: ${m.where}.`);
   result.advice = advice;
+  const over = exceeded.length
+    ? exceeded
+        .map(([b, actual]) =>
+          b.id === "band.min"
+            ? `at ${fW(c, actual)} the trailer would need more tongue weight than the ${tBound!.label.toLowerCase()} allows (largest trailer ${fW(c, b.value)}, ${fW(c, actual - b.value)} over)`
+            : `${b.label.toLowerCase()} allows ${fW(c, Math.max(0, b.value))} ${b.on === "G" ? "of trailer" : "on the tongue"}, the trailer puts ${fW(c, actual)} (${fW(c, actual - Math.max(0, b.value))} over)`,
+        )
+        .join("; ")
+    : "";
   result.message =
-    result.maxGrossTrailerWeight && result.maxTongueWeight
+    result.status === "over" && over
+      ? `This trailer is more than the rig allows: ${over}.`
+      : result.maxGrossTrailerWeight && result.maxTongueWeight
       ? `As loaded, this rig allows a trailer up to ${fW(c, result.maxGrossTrailerWeight.value / wf)} with up to ${fW(c, result.maxTongueWeight.value / wf)} on the tongue` +
         (result.binding ? `; first to bind: ${result.binding.label.toLowerCase()}.` : ".") +
         (result.status === "incomplete" ? " Some limits are not known yet, so it may be less." : "")

@@ -4,7 +4,7 @@
  * Source: 49 CFR 567.4(g)(3); GM (Cadillac) owner's manuals (tongue weight counts against payload).
  */
 import { fP, fW, govW, iW, marginW, NO_STEPS, NO_TEXT, qW, rW, statusOf, withMissing, type Ctx } from "../context";
-import type { Derived } from "../derive";
+import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
 import { need } from "../missing";
 import type { CheckResult, MissingField, Step } from "../types";
 
@@ -20,7 +20,7 @@ export function checkPayload(d: Derived, c: Ctx): CheckResult {
   const hitched = d.hasTrailer || d.hasAccessory;
   const hitchLoad = d.hitchLoad ?? 0;
   if (hitched && d.hitchLoad === undefined) {
-    if (d.hasTrailer) missing.push(need("trailer.tongueWeight"));
+    if (d.hasTrailer) missing.push(...needTongueWeight(d));
     else {
       if (rig.accessory!.weight === undefined) missing.push(need("accessory.weight"));
       if (rig.accessory!.loadWeight === undefined) missing.push(need("accessory.loadWeight"));
@@ -173,11 +173,16 @@ export function checkPayload(d: Derived, c: Ctx): CheckResult {
         ? `The vehicle carries ${fW(c, actual)} against a payload of ${fW(c, limit)}: ${fW(c, actual - limit)} too much.`
         : `The vehicle carries ${fW(c, actual)} of its ${fW(c, limit)} payload, leaving ${fW(c, limit - actual)} (${fP((limit - actual) / (limit || 1))}).` +
           (result.status === "incomplete" ? " Some figures are missing." : "");
-  if (d.weighedTotal !== undefined && v.gvwr !== undefined && actual !== undefined)
+  if (d.weighedTotal !== undefined && v.gvwr !== undefined && actual !== undefined) {
+    // `partial` is the weighed vehicle with its hitch load; `actual` may be the payload used (against the payload).
+    const weighs = partial;
     result.message =
       result.status === "over"
-        ? `Loaded and hitched, the vehicle weighs ${fW(c, actual)}, over its GVWR of ${fW(c, v.gvwr)}.`
-        : `Loaded and hitched, the vehicle weighs ${fW(c, actual)} of its ${fW(c, v.gvwr)} GVWR, leaving ${fW(c, v.gvwr - actual)}.` +
+        ? `Loaded and hitched, the vehicle weighs ${fW(c, weighs)}, ${fW(c, weighs - v.gvwr)} over its GVWR of ${fW(c, v.gvwr)}.`
+        : `Loaded and hitched, the vehicle weighs ${fW(c, weighs)} of its ${fW(c, v.gvwr)} GVWR, leaving ${fW(c, v.gvwr - weighs)}.` +
           (result.status === "incomplete" ? " Some figures are missing." : "");
+  }
+  const note = tongueWeightNote(d, c);
+  if (note) result.cautions = [...result.cautions, note];
   return result;
 }

@@ -3,7 +3,7 @@
  * public scale) and says whether the figure the checks use was weighed.
  */
 import { EPS, fP, fW, NO_STEPS, NO_TEXT, qW, type Ctx } from "../context";
-import type { Derived } from "../derive";
+import { tongueWeightNote, type Derived } from "../derive";
 import { tongueWeightByBeam, tongueWeightByPublicScale, tongueWeightByScale } from "../measure";
 import { need } from "../missing";
 import type { TongueMeasureResult } from "../types";
@@ -30,18 +30,23 @@ export function checkTongueMeasure(d: Derived, c: Ctx): TongueMeasureResult | nu
   if (measured !== undefined) {
     result.method = d.twMethod;
     result.measuredTongueWeight = qW(c, measured);
-    result.actual = qW(c, measured);
+    result.actual = qW(c, d.tw ?? measured);
     result.status = "within";
-    if (entered !== undefined) {
-      // The entered figure and the measurement should agree; a gap beyond the tight threshold is flagged.
+    if (entered !== undefined && t.tongueWeightBasis !== "estimated") {
+      // Two figures said to be weighed should agree; a gap beyond the tight threshold is flagged (the checks use the larger).
       const gap = Math.abs(entered - measured);
       const ref = Math.max(entered, measured);
       const ratio = gap <= EPS * Math.max(1, ref) ? 0 : gap / ref;
-      result.limit = qW(c, entered);
-      result.margin = { value: weightOut(entered - measured, c.u), unit: c.u.weight, ratio: 1 - ratio };
       if (ratio > c.tight + EPS) result.status = "tight";
     }
-  } else if (entered !== undefined && t.tongueWeightBasis !== "estimated") {
+  } else if (d.twMeasureMissing.length) {
+    // A half-entered beam measurement is no measurement: it never becomes a number.
+    result.missing = d.twMeasureMissing.map(need);
+    if (entered !== undefined && t.tongueWeightBasis === "measured") {
+      result.method = "entered";
+      result.actual = qW(c, entered);
+    }
+  } else if (entered !== undefined && t.tongueWeightBasis === "measured") {
     result.method = "entered";
     result.actual = qW(c, entered);
     result.status = "within";
@@ -80,22 +85,29 @@ export function checkTongueMeasure(d: Derived, c: Ctx): TongueMeasureResult | nu
   result.cautions = cautions;
   const advice: string[] = [];
   if (result.status === "tight" && entered !== undefined && measured !== undefined)
-    advice.push(`The entered tongue weight (${fW(c, entered)}) and the measurement (${fW(c, measured)}) disagree: weigh again and enter the measured figure.`);
-  if (result.status === "incomplete") advice.push(HOW_TO);
-  if (t.tongueWeightBasis === undefined && result.method === "entered")
-    cautions.push("Make sure the tongue weight entered was weighed, not taken from a brochure.");
+    advice.push(`The entered tongue weight (${fW(c, entered)}) and the measurement (${fW(c, measured)}) disagree: weigh again and enter the measured figure. Until then every check uses the larger.`);
+  if (d.twMeasureMissing.length)
+    advice.push("Measure both beam distances (block to jack, and jack to scale): with only one, the reading is not the tongue weight.");
+  else if (result.status === "incomplete") advice.push(HOW_TO);
+  const note = tongueWeightNote(d, c);
+  if (note) cautions.push(note);
   result.advice = advice;
 
-  result.message =
-    result.status === "incomplete"
+  result.message = d.twMeasureMissing.length
+    ? `The beam measurement lacks a distance (${d.twMeasureMissing.map((f) => (f.endsWith("jackToScale") ? "jack to scale" : "block to jack")).join(", ")}): the scale reading alone is not the tongue weight.`
+    : result.status === "incomplete"
       ? entered !== undefined
-        ? `The tongue weight of ${fW(c, entered)} is an estimate; weigh it to be sure.`
+        ? t.tongueWeightBasis === "estimated"
+          ? `The tongue weight of ${fW(c, entered)} is an estimate; weigh it to be sure.`
+          : `The tongue weight of ${fW(c, entered)} was not marked as weighed, so it is taken as an estimate; weigh it to be sure.`
         : "The tongue weight has not been weighed."
       : measured !== undefined
         ? `Measured tongue weight: ${fW(c, measured)}` +
           (entered !== undefined && result.status === "tight"
-            ? `, ${fP(Math.abs(entered - measured) / Math.max(entered, measured))} away from the ${fW(c, entered)} entered.`
-            : ".")
+            ? `, ${fP(Math.abs(entered - measured) / Math.max(entered, measured))} away from the ${fW(c, entered)} entered; the checks use ${fW(c, d.tw!)}.`
+            : entered !== undefined && t.tongueWeightBasis === "estimated"
+              ? `; the checks use it rather than the ${fW(c, entered)} estimate.`
+              : ".")
         : `Tongue weight entered as weighed: ${fW(c, entered ?? 0)}.`;
   return result;
 }

@@ -2,7 +2,7 @@
  * Check 2, tongue-weight share: TW ÷ GTW against the band for the trailer type (or the vehicle maker's band).
  */
 import { EPS, fP, fW, iN, iW, NO_STEPS, NO_TEXT, qP, qW, rN, rW, type Ctx } from "../context";
-import type { Derived } from "../derive";
+import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
 import { need } from "../missing";
 import type { CheckStatus, MissingField, Step, TongueShareResult } from "../types";
 
@@ -18,7 +18,7 @@ export function checkTongueShare(d: Derived, c: Ctx): TongueShareResult | null {
   const { band, gtw, tw } = d;
   const missing: MissingField[] = [];
   if (gtw === undefined) missing.push(need("trailer.grossTrailerWeight"));
-  if (tw === undefined) missing.push(need("trailer.tongueWeight"));
+  if (tw === undefined) missing.push(...needTongueWeight(d));
   const result: TongueShareResult = {
     id: "tongue-share",
     title: "Tongue-weight share",
@@ -45,7 +45,8 @@ export function checkTongueShare(d: Derived, c: Ctx): TongueShareResult | null {
     const nearLow = lowM <= highM;
     const edge = nearLow ? band.min : band.max;
     const ratio = nearLow ? lowM : highM;
-    const status: CheckStatus = low || high ? "over" : ratio < c.tight - EPS ? "tight" : "within";
+    // Outside the band the load must move before the trailer tows: a set-up to adjust, not a rating exceeded.
+    const status: CheckStatus = low || high ? "adjust" : ratio < c.tight - EPS ? "tight" : "within";
     result.status = status;
     result.actual = qP(share);
     result.limit = qP(edge);
@@ -64,7 +65,7 @@ export function checkTongueShare(d: Derived, c: Ctx): TongueShareResult | null {
         formula: "TW / GTW * 100",
         inputs: [iW(c, "TW", "Tongue weight", tw), iW(c, "GTW", "Gross trailer weight", gtw)],
         result: rN("s", share * 100, "%"),
-        note: d.twEstimated ? "The tongue weight is an estimate." : undefined,
+        note: tongueWeightNote(d, c),
       });
   } else if (gtw !== undefined) {
     result.estimatedTongueWeight = { low: qW(c, gtw * band.min), high: qW(c, gtw * band.max) };
@@ -82,7 +83,8 @@ export function checkTongueShare(d: Derived, c: Ctx): TongueShareResult | null {
   }
   if (!c.detail) return result;
   result.steps = steps;
-  result.cautions = CAUTIONS;
+  const note = tongueWeightNote(d, c);
+  result.cautions = note ? [...CAUTIONS, note] : CAUTIONS;
   const bandText = `${fP(band.min)} to ${fP(band.max)}`;
   const advice: string[] = [];
   if (low) advice.push("Move load forward in the trailer, ahead of its axle, until the tongue carries more; then weigh again.");

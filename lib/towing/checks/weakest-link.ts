@@ -18,7 +18,7 @@ import {
   worst,
   type Ctx,
 } from "../context";
-import type { Derived } from "../derive";
+import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
 import { need } from "../missing";
 import type { CheckStatus, Governing, Link, MissingField, Step, WeakestLinkResult } from "../types";
 
@@ -69,17 +69,22 @@ function buildRatingSet(d: Derived): RatingSet {
     tw.push({ id: "vehicle.tongueWeightLimit", label: "Vehicle tongue-weight limit", symbol: "T_veh", rating: v.tongueWeightLimit, note: wdUsed ? fallback : undefined });
   else missing.push(need(wdUsed ? "vehicle.tongueWeightLimitWd" : "vehicle.tongueWeightLimit"));
 
-  // Hitch (receiver)
+  // Hitch (receiver). A hitch label with only weight-carrying figures may mean the hitch is not made for weight
+  // distribution: with weight distribution used, its figure is still a limit, but the check waits for the label's
+  // figure with weight distribution.
+  const wcOnly = "Only a weight-carrying figure was entered: a hitch rated for weight-carrying only must not be used with weight distribution.";
   if (wdUsed && h?.gtwRatingWd !== undefined)
     gtw.push({ id: "hitch.gtwRatingWd", label: "Hitch rating with weight distribution", symbol: "R_hitch", rating: h.gtwRatingWd });
-  else if (h?.gtwRating !== undefined)
-    gtw.push({ id: "hitch.gtwRating", label: "Hitch rating", symbol: "R_hitch", rating: h.gtwRating, note: wdUsed ? fallback : undefined });
-  else missing.push(need(wdUsed ? "hitch.gtwRatingWd" : "hitch.gtwRating"));
+  else if (h?.gtwRating !== undefined) {
+    gtw.push({ id: "hitch.gtwRating", label: "Hitch rating", symbol: "R_hitch", rating: h.gtwRating, note: wdUsed ? wcOnly : undefined });
+    if (wdUsed) missing.push(need("hitch.gtwRatingWd"));
+  } else missing.push(need(wdUsed ? "hitch.gtwRatingWd" : "hitch.gtwRating"));
   if (wdUsed && h?.twRatingWd !== undefined)
     tw.push({ id: "hitch.twRatingWd", label: "Hitch tongue rating with weight distribution", symbol: "T_hitch", rating: h.twRatingWd });
-  else if (h?.twRating !== undefined)
-    tw.push({ id: "hitch.twRating", label: "Hitch tongue rating", symbol: "T_hitch", rating: h.twRating, note: wdUsed ? fallback : undefined });
-  else missing.push(need(wdUsed ? "hitch.twRatingWd" : "hitch.twRating"));
+  else if (h?.twRating !== undefined) {
+    tw.push({ id: "hitch.twRating", label: "Hitch tongue rating", symbol: "T_hitch", rating: h.twRating, note: wdUsed ? wcOnly : undefined });
+    if (wdUsed) missing.push(need("hitch.twRatingWd"));
+  } else missing.push(need(wdUsed ? "hitch.twRatingWd" : "hitch.twRating"));
 
   // Ball: every ball is stamped, so it is required.
   if (t?.ballRating !== undefined) gtw.push({ id: "trailer.ballRating", label: "Ball rating", symbol: "R_ball", rating: t.ballRating });
@@ -101,8 +106,14 @@ function buildRatingSet(d: Derived): RatingSet {
     if (wdr !== undefined) tw.push({ id: "weightDistribution.tongueRating", label: "Weight distribution rating", symbol: "T_wd", rating: wdr });
     else unchecked.push("weight distribution rating (label on the spring bars)");
   }
-  if (rig.extender?.twRating !== undefined)
-    tw.push({ id: "extender.twRating", label: "Extender tongue rating", symbol: "T_ext", rating: rig.extender.twRating });
+  // An extender is a link like any other: its label's ratings apply as stamped (never derated again here).
+  const ex = rig.extender;
+  if (ex) {
+    if (ex.twRating !== undefined) tw.push({ id: "extender.twRating", label: "Extender tongue rating", symbol: "T_ext", rating: ex.twRating });
+    else missing.push(need("extender.twRating"));
+    if (ex.gtwRating !== undefined) gtw.push({ id: "extender.gtwRating", label: "Extender rating", symbol: "R_ext", rating: ex.gtwRating });
+    else if (t) unchecked.push("extender gross trailer weight rating (label on the extender)");
+  }
 
   return { gtw, tw, missing, unchecked };
 }
@@ -141,6 +152,16 @@ function addLinks(acc: LinkAcc, c: Ctx, entries: RatingEntry[], actual: number |
   }
 }
 
+/** Cautions for any rig with an extender. Common practice, no published source: makers' own rules vary. */
+export function EXTENDER_CAUTIONS(wdUsed: boolean): string[] {
+  const list = [
+    "Many hitch and vehicle makers derate their ratings with an extender, or do not allow one: follow their instructions as well as the extender's own label.",
+    "An extender moves the load further behind the rear axle: more load on the rear axle and less on the front.",
+  ];
+  if (wdUsed) list.push("Most makers forbid weight distribution through an extender: check both makers' instructions before fitting the spring bars.");
+  return list;
+}
+
 const CAUTIONS = [
   "Every part between the vehicle and the trailer has its own rating; the lowest one is the limit for the whole rig.",
   "Read the figures from the labels and stamps on the parts themselves; a catalogue figure may differ.",
@@ -153,7 +174,7 @@ export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
   const set = ratingSet(d);
   const missing = set.missing.slice();
   if (d.gtw === undefined) missing.unshift(need("trailer.grossTrailerWeight"));
-  if (d.tw === undefined) missing.unshift(need("trailer.tongueWeight"));
+  if (d.tw === undefined) missing.unshift(...needTongueWeight(d));
 
   const acc: LinkAcc = { links: [], statuses: [], bestRatio: Infinity, governing: undefined, govActual: 0, govLimit: 0 };
   addLinks(acc, c, set.gtw, d.gtw, "gross-trailer-weight");
@@ -162,7 +183,8 @@ export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
 
   // Ball and coupler must be the same size: a mismatch can let the trailer come off.
   const sizeMismatch = t.ballSize !== undefined && t.couplerBallSize !== undefined && t.ballSize !== t.couplerBallSize;
-  if (sizeMismatch) statuses.push("over");
+  // A set-up to change (fit the matching ball), not a rating exceeded.
+  if (sizeMismatch) statuses.push("adjust");
 
   const lowG = lowest(set.gtw);
   const lowT = lowest(set.tw);
@@ -214,7 +236,7 @@ export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
         formula: `${sym}_max - ${sym}`,
         inputs: [iW(c, `${sym}_max`, `Lowest ${words} rating`, low.rating), iW(c, sym, words[0]!.toUpperCase() + words.slice(1), actual)],
         result: rW(c, `M_${sym}`, low.rating - actual),
-        note: sym === "TW" && d.twEstimated ? "The tongue weight is an estimate." : undefined,
+        note: sym === "TW" ? tongueWeightNote(d, c) : undefined,
       });
   }
   result.steps = steps;
@@ -233,7 +255,9 @@ export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
   if (status === "tight") advice.push("Little room is left: weigh the loaded trailer before each trip and load no more.");
   for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
   if (set.unchecked.length) cautions.push(`Not checked because no figure was entered: ${set.unchecked.join("; ")}.`);
-  if (d.twEstimated) cautions.push("The tongue weight is an estimate; weigh it to be sure.");
+  const twNote = tongueWeightNote(d, c);
+  if (twNote) cautions.push(twNote);
+  if (d.rig.extender) cautions.push(...EXTENDER_CAUTIONS(d.wdUsed));
   const cls = d.rig.hitch?.class;
   const classMax = cls !== undefined ? CLASS_MAX_GTW[cls] : undefined;
   if (classMax !== undefined && d.gtw !== undefined && d.gtw > classMax)
@@ -241,7 +265,7 @@ export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
   result.advice = advice;
   result.cautions = cautions;
 
-  if (sizeMismatch) result.message = "The ball and the coupler are different sizes.";
+  if (sizeMismatch && status !== "over") result.message = `The ball (${t.ballSize} in) and the coupler (${t.couplerBallSize} in) are different sizes: fit the matching ball before towing.`;
   else if (!governing) result.message = "Enter the trailer's weights and the ratings to find the weakest link.";
   else {
     const g = governing as Governing;

@@ -6,15 +6,19 @@
  * ratings exceeded) or advisable (the weight-carrying ratings are tight).
  */
 import { EPS, fL, govW, marginW, ratioOf, fP, fW, iL, iN, iW, lessOrEqual, lessThan, NO_STEPS, NO_TEXT, qL, qP, qW, rL, rN, rW, statusOf, type Ctx } from "../context";
-import type { Derived } from "../derive";
+import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
 import { need } from "../missing";
 import type { AxleLoads, CheckStatus, MissingField, Step, WeightDistributionResult } from "../types";
 
 /** The usual target. Source: Ram owner's manuals (2015, 2018, 2023), citing SAE J2807. */
 export const DEFAULT_RESTORATION_TARGET = 0.5;
+/** Spring bars rated above this many times the tongue weight ride stiff and cannot be set well. Common practice, no published source. */
+export const SPRING_BAR_OVERSIZE = 2;
 
 export interface WdState {
   target: number;
+  /** The fender readings cannot be right (hitched no higher than unhitched, or the bars lifting the front further). */
+  readingsWrong?: "hitched-not-higher" | "wd-higher-than-hitched";
   restoration?: number;
   /** Restoration used for axle loads: measured, else the target. */
   restorationUsed?: number;
@@ -34,8 +38,17 @@ function buildWdState(d: Derived): WdState {
   if (!wd) return s;
   const { fenderUnhitched: h1, fenderHitched: h2, fenderWithWd: h3 } = wd;
   if (h1 !== undefined && h2 !== undefined) {
-    s.targetFenderHeight = h1 + (h2 - h1) * (1 - target);
-    if (h3 !== undefined && h2 - h1 > EPS * Math.max(1, h2)) s.restoration = (h2 - h3) / (h2 - h1);
+    // Physics: a tongue load lifts the front, so hitched the fender sits higher than unhitched; the bars bring it
+    // back down, never above the hitched height. Readings the other way round are misreadings, not a set-up.
+    if (!(h2 - h1 > EPS * Math.max(1, h2))) s.readingsWrong = "hitched-not-higher";
+    else {
+      s.targetFenderHeight = h1 + (h2 - h1) * (1 - target);
+      if (h3 !== undefined) {
+        const r = (h2 - h3) / (h2 - h1);
+        if (r < -EPS) s.readingsWrong = "wd-higher-than-hitched";
+        else s.restoration = r;
+      }
+    }
   }
   if (s.restoration !== undefined) s.restorationUsed = s.restoration;
   else {
@@ -125,10 +138,11 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
   let status: CheckStatus;
   if (!d.wdUsed) {
     if (gtw === undefined) missing.push(need("trailer.grossTrailerWeight"));
-    if (tw === undefined) missing.push(need("trailer.tongueWeight"));
+    if (tw === undefined) missing.push(...needTongueWeight(d));
     if (!wcGtw.length) missing.push(need("vehicle.towRating"));
     if (!wcTw.length) missing.push(need("vehicle.tongueWeightLimit"));
-    status = required ? "over" : missing.length ? "incomplete" : advisable ? "tight" : "within";
+    // Weight distribution to fit is a set-up to change; the ratings exceeded without it show in the weakest link.
+    status = missing.length ? "incomplete" : required ? "adjust" : advisable ? "tight" : "within";
     if (gov) {
       result.actual = qW(c, govActual);
       result.limit = qW(c, gov[2]);
@@ -139,6 +153,7 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
     if (wd?.fenderUnhitched === undefined) missing.push(need("weightDistribution.fenderUnhitched"));
     if (wd?.fenderHitched === undefined) missing.push(need("weightDistribution.fenderHitched"));
     if (wd?.fenderWithWd === undefined) missing.push(need("weightDistribution.fenderWithWd"));
+    if (s.readingsWrong) missing.push(need(s.readingsWrong === "hitched-not-higher" ? "weightDistribution.fenderHitched" : "weightDistribution.fenderWithWd"));
     const r = s.restoration;
     if (r === undefined) {
       if (!missing.length) missing.push(need("weightDistribution.fenderHitched"));
@@ -146,14 +161,15 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
     } else {
       result.restoration = r;
       result.actual = qP(r);
+      // Spring bars to re-set are a set-up to adjust, not a rating exceeded.
       if (!lessOrEqual(r, 1)) {
-        status = "over";
+        status = "adjust";
         result.limit = qP(1);
         result.margin = { value: (1 - r) * 100, unit: "%", ratio: 1 - r };
         result.governing = { id: "restoration.max", label: "All of the lost load (100 %)", value: 100, unit: "%" };
       } else if (r < s.target * (1 - EPS)) {
         const shortfall = (s.target - r) / s.target;
-        status = shortfall <= c.tight + EPS ? "tight" : "over";
+        status = shortfall <= c.tight + EPS ? "tight" : "adjust";
         result.limit = qP(s.target);
         result.margin = { value: (r - s.target) * 100, unit: "%", ratio: -shortfall };
         result.governing = { id: "weightDistribution.restorationTarget", label: "Restoration target", value: s.target * 100, unit: "%" };
@@ -164,6 +180,9 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
         result.governing = { id: "restoration.max", label: "All of the lost load (100 %)", value: 100, unit: "%" };
       }
     }
+    // Bars far stiffer than the tongue needs: a caution that may make the check tight, never more.
+    if (status === "within" && wd?.tongueRating !== undefined && tw !== undefined && tw > 0 && wd.tongueRating > SPRING_BAR_OVERSIZE * tw * (1 + EPS))
+      status = "tight";
   }
   result.status = status;
 
@@ -173,6 +192,7 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
     const w = axlesWithWd(aw.front, aw.rear, tw, v.wheelbase, d.overhang, s.restorationUsed);
     const withWd: AxleLoads = { front: qW(c, w.front), rear: qW(c, w.rear) };
     result.withWd = withWd;
+    if (s.restorationIsTarget) result.estimated = true;
     if (c.detail) {
       steps.push({
         id: "wd-front",
@@ -181,7 +201,7 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
         formula: "F_0 - (1 - R) * TW * OH / WB",
         inputs: [iW(c, "F_0", "Front axle unhitched", aw.front), iN("R", "Restoration", s.restorationUsed, ""), iW(c, "TW", "Tongue weight", tw), iL(c, "OH", "Rear axle to ball", d.overhang), iL(c, "WB", "Wheelbase", v.wheelbase)],
         result: rW(c, "F_wd", w.front),
-        note: s.restorationIsTarget ? "Restoration taken at the target, as it is not measured yet." : undefined,
+        note: s.restorationIsTarget ? "An estimate: restoration taken at the target, as it is not measured yet." : undefined,
       });
       steps.push({
         id: "wd-rear",
@@ -197,7 +217,7 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
   if (missing.length) result.missing = missing;
   if (!c.detail) return result;
 
-  if (wd?.fenderUnhitched !== undefined && wd.fenderHitched !== undefined)
+  if (wd?.fenderUnhitched !== undefined && wd.fenderHitched !== undefined && s.targetFenderHeight !== undefined)
     steps.unshift({
       id: "target-fender-height",
       title: "Fender height to aim for",
@@ -225,7 +245,18 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
       result: rW(c, "M_wc", gov[2] - govActual),
     });
   result.steps = steps;
-  result.cautions = CAUTIONS;
+  const cautions = CAUTIONS.slice();
+  if (d.wdUsed && rig.trailer?.brakes === "surge")
+    cautions.push("Surge brakes and weight distribution: many weight-distribution makers allow only certain systems (or none) with surge brakes, as the bars and friction sway control can stop the brakes from working. Use one its maker approves for surge brakes. Common practice, no published source.");
+  const bars = wd?.tongueRating;
+  const oversized = d.wdUsed && bars !== undefined && tw !== undefined && tw > 0 && bars > SPRING_BAR_OVERSIZE * tw * (1 + EPS);
+  if (oversized)
+    cautions.push(`The spring bars are rated ${fW(c, bars!)}, more than twice the ${fW(c, tw!)} tongue weight: bars this stiff ride hard and are hard to set. Common practice, no published source: choose bars rated near the tongue weight plus any load behind the rear axle.`);
+  if (s.restorationIsTarget && d.wdUsed) cautions.push("Loads with weight distribution are estimates at the target restoration until the fender heights are measured.");
+  const note = tongueWeightNote(d, c);
+  if (note) cautions.push(note);
+  if (d.wdUsed && rig.extender) cautions.push("Most makers forbid weight distribution through an extender: check both makers' instructions.");
+  result.cautions = cautions;
   const advice: string[] = [];
   if (!d.wdUsed) {
     if (required) advice.push("Fit weight distribution rated for this tongue weight, or tow a lighter trailer: the weight-carrying limits are exceeded.");
@@ -233,9 +264,16 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
   } else if (s.restoration !== undefined) {
     if (s.restoration > 1 + EPS) advice.push(`Ease the spring bars: the front fender should come to about ${fL(c, s.targetFenderHeight!)}.`);
     else if (s.restoration < s.target * (1 - EPS)) advice.push(`Tighten the spring bars until the front fender comes down to about ${fL(c, s.targetFenderHeight!)}.`);
+  } else if (s.readingsWrong) {
+    advice.push(
+      s.readingsWrong === "hitched-not-higher"
+        ? "Check the fender readings: hitched (bars released) the front fender should sit higher than unhitched. Measure again at the same point, on level ground."
+        : "Check the fender readings: with the bars engaged the front fender should sit no higher than hitched with them released. Measure again at the same point, on level ground.",
+    );
   } else if (s.targetFenderHeight !== undefined) {
     advice.push(`Adjust the weight distribution until the front fender sits at about ${fL(c, s.targetFenderHeight)}, then enter that height.`);
   }
+  if (oversized && status === "tight") advice.push("Consider spring bars rated nearer the tongue weight.");
   for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
   result.advice = advice;
   if (!d.wdUsed)
@@ -247,8 +285,9 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
           ? "Enter the trailer's weights and the weight-carrying ratings to tell whether weight distribution is needed."
           : `Weight distribution is not needed for this trailer${gov ? ` (closest limit: ${gov[1].toLowerCase()}, ${fW(c, gov[2])})` : ""}.`;
   else
-    result.message =
-      s.restoration === undefined
+    result.message = s.readingsWrong
+      ? "Check the fender readings: they cannot be right as entered, so the restoration is not worked out."
+      : s.restoration === undefined
         ? s.targetFenderHeight !== undefined
           ? `Adjust the front fender to about ${fL(c, s.targetFenderHeight)} (${fP(s.target)} restoration).`
           : "Measure the front fender height unhitched, hitched, and hitched with weight distribution."

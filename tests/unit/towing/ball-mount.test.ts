@@ -39,11 +39,12 @@ describe("ball mount", () => {
     expect(nearestCommonDrop(14)).toBe(12); // Common practice, no published source
   });
 
-  it("is over when the trailer rides well off level", () => {
+  it("asks to adjust the set-up when the trailer rides well off level", () => {
     const res = bm(pickupRig({ ballMount: { drop: 2 } }));
-    // Source: boating publication how-to: 6 in needed, 2 in fitted → 4 in off level
+    // Source: boating publication how-to: 6 in needed, 2 in fitted → 4 in off level; the 1 in allowance is
+    // common practice, no published source, and a ball mount to change is a set-up to adjust, never "over"
     expect(res.actual?.value).toBe(4);
-    expect(res.status).toBe("over");
+    expect(res.status).toBe("adjust");
     expect(res.advice[0]).toContain("6 in drop");
   });
 

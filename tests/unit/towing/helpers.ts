@@ -24,7 +24,8 @@ export function pickupRig(over: Record<string, unknown> = {}): RigInput {
       gawrRear: 4000,
       axleWeights: { front: 3000, rear: 2500 },
       wheelbase: 145,
-      rearAxleToHitch: 50,
+      // Geometry: 41 in to the pin hole + 9 in ball mount = 50 in to the ball
+      rearAxleToPin: 41,
     },
     hitch: { class: 3, receiverSize: "2", gtwRating: 4500, twRating: 675, gtwRatingWd: 5000, twRatingWd: 675, receiverHeight: 26, pinToFascia: 5.5 },
     trailer: {

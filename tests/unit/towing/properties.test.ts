@@ -127,6 +127,17 @@ const rigArb: fc.Arbitrary<RigInput> = fc
     load: opt(fc.record({ occupants: o("load.occupants"), cargo: o("load.cargo"), hitchHardware: o("load.hitchHardware") })),
   })
   .map(({ hitched, ...rest }) => {
+    // The tongue never carries more than the whole trailer (the schema refuses it): keep generated rigs valid.
+    const t = (hitched as { trailer?: Record<string, unknown> }).trailer;
+    if (t && typeof t.grossTrailerWeight === "number") {
+      const g = t.grossTrailerWeight;
+      if (typeof t.tongueWeight === "number" && t.tongueWeight > g) t.tongueWeight = g;
+      const m = t.tongueMeasurement as { scaleReading: number; blockToJack?: number; jackToScale?: number } | undefined;
+      if (m) {
+        const k = m.blockToJack !== undefined && m.jackToScale !== undefined ? (m.blockToJack + m.jackToScale) / m.blockToJack : 1;
+        if (m.scaleReading * k > g) m.scaleReading = g / k;
+      }
+    }
     const parsed = parseRig({ units: "imperial", ...rest, ...hitched });
     if (!parsed.ok) throw new Error("generator made an invalid rig: " + JSON.stringify(parsed.fieldErrors));
     return parsed.rig;
@@ -140,7 +151,7 @@ function nonFinitePaths(value: unknown, path = "", out: string[] = []): string[]
   return out;
 }
 
-const RANK: Record<CheckStatus, number> = { within: 0, tight: 1, incomplete: 2, over: 3 };
+const RANK: Record<CheckStatus, number> = { within: 0, tight: 1, adjust: 2, incomplete: 3, over: 4 };
 const statuses = (r: RigResult) => Object.fromEntries(r.checks.map((c) => [c.id, c.status]));
 
 describe("properties over the valid input space", () => {
@@ -201,13 +212,17 @@ describe("properties over the valid input space", () => {
         const g = t!.grossTrailerWeight! * k;
         const w = t!.tongueWeight !== undefined ? t!.tongueWeight * k : undefined;
         fc.pre(g <= 30000 && (w === undefined || w <= 6000));
-        const heavier = parseRig({ ...rig, trailer: { ...t, grossTrailerWeight: g, tongueWeight: w } });
-        if (!heavier.ok) throw new Error("invalid");
-        const sa = statuses(evaluateRig(rig));
+        // Only the trailer's own figures scale: a separate measurement would not, so it is left out of both.
+        const base = parseRig({ ...rig, vehicle: { ...rig.vehicle, axleWeightsHitched: undefined }, trailer: { ...t, tongueMeasurement: undefined } });
+        const heavier = parseRig({ ...rig, vehicle: { ...rig.vehicle, axleWeightsHitched: undefined }, trailer: { ...t, tongueMeasurement: undefined, grossTrailerWeight: g, tongueWeight: w } });
+        if (!heavier.ok || !base.ok) throw new Error("invalid");
+        const sa = statuses(evaluateRig(base.rig));
         const sb = statuses(evaluateRig(heavier.rig));
         // The share itself does not change; the measuring check compares with a separate measurement.
         for (const id of Object.keys(sa)) {
           if (id === "tongue-measure") continue;
+          // Spring bars far stiffer than a light tongue (a common-practice caution) suit a heavier one better.
+          if (id === "weight-distribution" && sa[id] === "tight" && sb[id] === "within") continue;
           if (id === "tongue-share") expect(sb[id]).toBe(sa[id]);
           else expect(RANK[sb[id]!], id).toBeGreaterThanOrEqual(RANK[sa[id]!]);
         }

@@ -51,11 +51,11 @@ describe("verdict", () => {
   it("never reads within only because data is missing", () => {
     const v = evaluateRig(pickupRig({ vehicle: { gcwr: undefined } })).verdict;
     expect(v.levelFromCheckedOnly).toBe("within");
-    expect(v.level).toBe("tight");
+    expect(v.level).toBe("incomplete");
     expect(v.complete).toBe(false);
     expect(v.incomplete).toContain("combined-weight");
     expect(v.incomplete).toEqual(["combined-weight", "envelope"]);
-    expect(v.message).toMatch(/2 checks still lack data/);
+    expect(v.message).toMatch(/^Not confirmed: .*2 checks still lack data/);
   });
 
   it("the fast path agrees with the full evaluation", () => {

@@ -64,8 +64,8 @@ describe("weakest link", () => {
 
   it("flags a ball that does not match the coupler", () => {
     const res = wl(pickupRig({ trailer: { ballSize: "1-7/8", couplerBallSize: "2" } }));
-    // Common practice, no published source: the ball must match the coupler's size
-    expect(res.status).toBe("over");
+    // Source: 15 CRR-NY 57.5 Table 1 (ball and coupler sized together); a ball to change is a set-up to adjust
+    expect(res.status).toBe("adjust");
     expect(res.advice[0]).toContain("2 in ball");
   });
 

@@ -41,13 +41,14 @@ describe("weight distribution", () => {
     const res = metricWd(1025);
     // Common practice, no published source (REFERENCES: more than 100 % over-loads the front): (1058 − 1025) ÷ 28 = 117.9 %
     expect(res.restoration).toBeCloseTo(33 / 28, 9);
-    expect(res.status).toBe("over");
+    // Spring bars to re-set: a set-up to adjust, not a rating exceeded
+    expect(res.status).toBe("adjust");
     expect(res.advice[0]).toMatch(/Ease/);
   });
 
   it("flags too little restoration", () => {
     // Source: Ram owner's manuals, citing SAE J2807: (1058 − 1052) ÷ 28 = 21.4 %, well short of 50 %
-    expect(metricWd(1052).status).toBe("over");
+    expect(metricWd(1052).status).toBe("adjust");
     // 13 ÷ 28 = 46.4 %, 7 % short of the target: tight at the default 10 % threshold
     expect(metricWd(1045).status).toBe("tight");
   });
@@ -64,7 +65,8 @@ describe("weight distribution", () => {
     const res = wd(pickupRig({ vehicle: { wdRequiredAbove: 3500 } }));
     // Common practice, no published source: the vehicle maker's "weight distribution required above" figure
     expect(res.required).toBe(true);
-    expect(res.status).toBe("over");
+    // Weight distribution to fit is a set-up to adjust
+    expect(res.status).toBe("adjust");
   });
 
   it("is required when the weight-carrying ratings are exceeded", () => {
@@ -88,5 +90,42 @@ describe("weight distribution", () => {
     expect(imp.restoration).toBeCloseTo(0.6 / 1.1, 9);
     expect(met.restoration).toBeCloseTo(imp.restoration!, 9);
     expect(met.status).toBe(imp.status);
+  });
+
+  it("asks to check fender readings entered the wrong way round", () => {
+    // Statics: a tongue load lifts the front, so hitched (1020 mm) cannot sit lower than unhitched (1030 mm)
+    const wrong = wd(convertRig(pickupRig({ weightDistribution: { used: true, tongueRating: 1000, fenderUnhitched: 1030 / 25.4, fenderHitched: 1020 / 25.4, fenderWithWd: 1025 / 25.4 } }), "metric"));
+    expect(wrong.status).toBe("incomplete");
+    expect(wrong.restoration).toBeUndefined();
+    expect(wrong.targetFenderHeight).toBeUndefined();
+    expect(wrong.advice.join(" ")).toMatch(/Check the fender readings/);
+    expect(wrong.advice.join(" ")).not.toMatch(/Adjust the weight distribution until/);
+    // Statics: the bars cannot lift the front above its hitched height: 1060 mm with WD above 1058 mm hitched
+    const up = metricWd(1060);
+    expect(up.status).toBe("incomplete");
+    expect(up.advice.join(" ")).toMatch(/Check the fender readings/);
+  });
+
+  it("flags spring bars far stiffer than the tongue needs, as a caution only", () => {
+    // Common practice, no published source: bars rated 1,200 lb for a 500 lb tongue (more than twice) ride stiff
+    const stiff = wd(pickupRig({ weightDistribution: { used: true, tongueRating: 1200, fenderUnhitched: 39.5, fenderHitched: 40.6, fenderWithWd: 40 } }));
+    expect(stiff.status).toBe("tight");
+    expect(stiff.cautions.join(" ")).toMatch(/more than twice/);
+    // Common practice, no published source: 1,000 lb bars for 500 lb are not more than twice
+    const fine = wd(pickupRig({ weightDistribution: { used: true, tongueRating: 1000, fenderUnhitched: 39.5, fenderHitched: 40.6, fenderWithWd: 40 } }));
+    expect(fine.status).toBe("within");
+  });
+
+  it("cautions about surge brakes with weight distribution", () => {
+    const r = wd(pickupRig({ trailer: { brakes: "surge" }, weightDistribution: { used: true, tongueRating: 1000 } }));
+    // Common practice, no published source: many WD makers restrict their systems with surge brakes
+    expect(r.cautions.join(" ")).toMatch(/Surge brakes and weight distribution/);
+    expect(wd(pickupRig({ weightDistribution: { used: true, tongueRating: 1000 } })).cautions.join(" ")).not.toMatch(/Surge brakes/);
+  });
+
+  it("marks the loads with weight distribution as an estimate until the fender heights are measured", () => {
+    const r = wd(pickupRig({ weightDistribution: { used: true, tongueRating: 1000 } }));
+    expect(r.estimated).toBe(true);
+    expect(r.missing?.map((m) => m.field)).toEqual(["weightDistribution.fenderUnhitched", "weightDistribution.fenderHitched", "weightDistribution.fenderWithWd"]);
   });
 });
