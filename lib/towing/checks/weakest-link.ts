@@ -226,7 +226,7 @@ export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
       formula: entries.length > 1 ? `min(${entries.map((e) => e.symbol).join(", ")})` : entries[0]!.symbol,
       inputs: entries.map((e) => iW(c, e.symbol, e.label, e.rating)),
       result: rW(c, `${sym}_max`, low.rating),
-      note: entries.find((e) => e.note)?.note,
+      note: [...new Set(entries.filter((e) => e.note).map((e) => e.note!))].join(" ") || undefined,
     });
     if (actual !== undefined)
       steps.push({

@@ -15,6 +15,7 @@ import {
   RECEIVER_SIZES,
   TRAILER_TYPES,
   type CheckStatus,
+  type EnvelopeResult,
   type RigInput,
   type RigResult,
   type WeakestLinkResult,
@@ -50,6 +51,7 @@ const vehicle = fc.record({
   axleWeights: pair("vehicle.axleWeights"),
   axleWeightsHitched: opt(pair("vehicle.axleWeightsHitched")).map((x) => x ?? undefined),
   wheelbase: o("vehicle.wheelbase"),
+  rearAxleToPin: o("vehicle.rearAxleToPin"),
   rearAxleToHitch: o("vehicle.rearAxleToHitch"),
   wdRequiredAbove: o("vehicle.wdRequiredAbove"),
   departureAngle: o("vehicle.departureAngle"),
@@ -113,7 +115,7 @@ const rigArb: fc.Arbitrary<RigInput> = fc
         squatAllowance: o("ballMount.squatAllowance"),
       }),
     ),
-    extender: opt(fc.record({ length: num("extender.length"), twRating: o("extender.twRating") })),
+    extender: opt(fc.record({ length: num("extender.length"), gtwRating: o("extender.gtwRating"), twRating: o("extender.twRating") })),
     weightDistribution: opt(
       fc.record({
         used: fc.boolean(),
@@ -249,6 +251,94 @@ describe("properties over the valid input space", () => {
           const b = met.checks[i]!;
           expect(b.governing?.id).toBe(a.governing?.id);
           if (a.margin && b.margin) expect(b.margin.ratio).toBeCloseTo(a.margin.ratio, 6);
+        }
+      }),
+      { numRuns: RUNS },
+    );
+  });
+
+  // A figure with weight distribution replaces the weight-carrying one that stood in for it, so it is not an added link.
+  it("adding a link never raises an allowed weight", () => {
+    const LINKS: Array<[string, string, string]> = [
+      ["trailer", "couplerRating", "trailer.couplerRating"],
+      ["trailer", "safetyChainRating", "trailer.safetyChainRating"],
+      ["trailer", "ballRating", "trailer.ballRating"],
+      ["ballMount", "gtwRating", "ballMount.gtwRating"],
+      ["ballMount", "twRating", "ballMount.twRating"],
+      ["hitch", "gtwRating", "hitch.gtwRating"],
+      ["hitch", "twRating", "hitch.twRating"],
+      ["vehicle", "towRating", "vehicle.towRating"],
+      ["vehicle", "tongueWeightLimit", "vehicle.tongueWeightLimit"],
+      ["weightDistribution", "tongueRating", "weightDistribution.tongueRating"],
+    ];
+    fc.assert(
+      fc.property(rigArb, fc.constantFrom(...LINKS), fc.integer({ min: 0, max: 6000 }), (rig, [section, key, path], value) => {
+        const sec = (rig as Record<string, unknown>)[section] as Record<string, unknown> | undefined;
+        fc.pre(sec?.[key] === undefined && (section !== "trailer" || !!rig.trailer) && (section !== "weightDistribution" || !!rig.weightDistribution));
+        const r = FIELD_RANGES[path]!;
+        const withLink = parseRig({ ...rig, [section]: { ...(sec ?? {}), [key]: Math.min(r.max, Math.max(r.min, value)) } });
+        if (!withLink.ok) throw new Error("invalid: " + JSON.stringify(withLink.fieldErrors));
+        const before = evaluateRig(rig).checks.find((c) => c.id === "envelope") as EnvelopeResult | undefined;
+        const after = evaluateRig(withLink.rig).checks.find((c) => c.id === "envelope") as EnvelopeResult | undefined;
+        const tol = (x: number) => x + 1e-9 * Math.max(1, Math.abs(x));
+        if (before?.maxGrossTrailerWeight && after?.maxGrossTrailerWeight) expect(after.maxGrossTrailerWeight.value).toBeLessThanOrEqual(tol(before.maxGrossTrailerWeight.value));
+        if (before?.maxTongueWeight && after?.maxTongueWeight) expect(after.maxTongueWeight.value).toBeLessThanOrEqual(tol(before.maxTongueWeight.value));
+        const wlB = evaluateRig(rig).checks.find((c) => c.id === "weakest-link") as WeakestLinkResult | undefined;
+        const wlA = evaluateRig(withLink.rig).checks.find((c) => c.id === "weakest-link") as WeakestLinkResult | undefined;
+        if (wlB?.governingGrossTrailerWeight && wlA?.governingGrossTrailerWeight) expect(wlA.governingGrossTrailerWeight.value).toBeLessThanOrEqual(tol(wlB.governingGrossTrailerWeight.value));
+        if (wlB?.governingTongueWeight && wlA?.governingTongueWeight) expect(wlA.governingTongueWeight.value).toBeLessThanOrEqual(tol(wlB.governingTongueWeight.value));
+      }),
+      { numRuns: RUNS },
+    );
+  });
+
+  it("a check whose inputs are incomplete never reads within (nor tight), and neither does the verdict", () => {
+    fc.assert(
+      fc.property(rigArb, (rig) => {
+        for (const r of [evaluateRig(rig), evaluateRig(convertRig(rig, "metric"))]) {
+          for (const c of r.checks) if (c.missing?.length) expect(["incomplete", "over"], `${c.id}`).toContain(c.status);
+          if (!r.verdict.complete) expect(["incomplete", "over"]).toContain(r.verdict.level);
+          if (r.verdict.level === "within" || r.verdict.level === "tight") for (const c of r.checks) expect(c.missing ?? []).toEqual([]);
+        }
+      }),
+      { numRuns: RUNS },
+    );
+  });
+
+  it("swapping the entered and the weighed tongue weight never hides an over", () => {
+    fc.assert(
+      fc.property(rigArb, fc.integer({ min: 0, max: 6000 }), fc.integer({ min: 0, max: 6000 }), fc.constantFrom("measured" as const, undefined), (rig, a, b, basis) => {
+        const t = rig.trailer;
+        fc.pre(!!t);
+        const cap = t!.grossTrailerWeight ?? 6000;
+        const x = Math.min(a, cap);
+        const y = Math.min(b, cap);
+        const make = (entered: number, weighed: number) => {
+          const p = parseRig({ ...rig, trailer: { ...t, tongueWeight: entered, tongueWeightBasis: basis, tongueMeasurement: { scaleReading: weighed } } });
+          if (!p.ok) throw new Error("invalid: " + JSON.stringify(p.fieldErrors));
+          return evaluateRig(p.rig);
+        };
+        const one = make(x, y);
+        const two = make(y, x);
+        const overs = (r: RigResult) => r.checks.filter((c) => c.status === "over").map((c) => c.id);
+        expect(overs(two)).toEqual(overs(one));
+        expect(two.verdict.level === "over").toBe(one.verdict.level === "over");
+        // An estimate beside a weighing: the weighing is used, so an over it shows is never hidden by the estimate
+        const est = parseRig({ ...rig, trailer: { ...t, tongueWeight: Math.min(x, y), tongueWeightBasis: "estimated", tongueMeasurement: { scaleReading: Math.max(x, y) } } });
+        if (!est.ok) throw new Error("invalid");
+        expect(overs(evaluateRig(est.rig))).toEqual(expect.arrayContaining(overs(make(Math.max(x, y), Math.max(x, y))).filter((id) => id !== "tongue-measure")));
+      }),
+      { numRuns: RUNS },
+    );
+  });
+
+  it("a badge and its figures always agree: over has a negative margin, and a negative margin is never a pass", () => {
+    fc.assert(
+      fc.property(rigArb, (rig) => {
+        for (const c of evaluateRig(rig).checks) {
+          if (!c.margin) continue;
+          if (c.status === "over") expect(c.margin.value, c.id).toBeLessThan(0);
+          if (c.margin.value < -1e-6 * Math.max(1, Math.abs(c.limit?.value ?? 1))) expect(["over", "adjust", "incomplete"], `${c.id} ${c.status}`).toContain(c.status);
         }
       }),
       { numRuns: RUNS },
