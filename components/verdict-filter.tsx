@@ -1,8 +1,7 @@
-import { Field, Select, verdictWords } from "@/components/ui";
+import { Field, Select, levelWords } from "@/components/ui";
+import { VERDICT_LEVELS as LEVELS } from "@/lib/towing/types";
 
-const LEVELS = ["within", "tight", "over"] as const;
-
-/** The "Verdict" filter of a list: any, or one of the three levels, in the badges' own words. */
+/** The "Verdict" filter of a list: any, or one of the levels, in the verdict badges' own words. */
 export function VerdictFilter({ value, onChange }: { value: string; onChange: (value: string) => void }) {
   return (
     <Field label="Verdict">
@@ -10,7 +9,7 @@ export function VerdictFilter({ value, onChange }: { value: string; onChange: (v
         <option value="">Any</option>
         {LEVELS.map((level) => (
           <option key={level} value={level}>
-            {verdictWords[level]}
+            {levelWords[level]}
           </option>
         ))}
       </Select>

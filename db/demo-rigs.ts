@@ -13,7 +13,7 @@ export const DEMO_VEHICLES: Array<{ name: string } & VehiclePart> = [
     name: "Harrow Rookfield 2500 pickup",
     vehicle: {
       towRating: 5000, towRatingWd: 9000, tongueWeightLimit: 500, tongueWeightLimitWd: 900, gvwr: 7000, curbWeight: 5100,
-      gcwr: 14000, gawrFront: 3700, gawrRear: 4000, axleWeights: { front: 3150, rear: 2500 }, wheelbase: 145, rearAxleToHitch: 50, wdRequiredAbove: 5000, departureAngle: 24,
+      gcwr: 14000, gawrFront: 3700, gawrRear: 4000, axleWeights: { front: 3150, rear: 2500 }, wheelbase: 145, rearAxleToPin: 41, wdRequiredAbove: 5000, departureAngle: 24,
     },
     hitch: { class: 4, receiverSize: "2", gtwRating: 6000, twRating: 600, gtwRatingWd: 10000, twRatingWd: 1000, receiverHeight: 21, pinToFascia: 5.5 },
     load: { occupants: 350, cargo: 150, hitchHardware: 50 },
@@ -22,7 +22,7 @@ export const DEMO_VEHICLES: Array<{ name: string } & VehiclePart> = [
     name: "Stellmark Wendle SUV",
     vehicle: {
       towRating: 6500, towRatingWd: 6500, tongueWeightLimit: 650, gvwr: 6400, curbWeight: 4800, gcwr: 11500,
-      gawrFront: 3200, gawrRear: 3500, axleWeights: { front: 2750, rear: 2525 }, wheelbase: 120, rearAxleToHitch: 45, departureAngle: 22,
+      gawrFront: 3200, gawrRear: 3500, axleWeights: { front: 2750, rear: 2525 }, wheelbase: 120, rearAxleToPin: 37, departureAngle: 22,
     },
     hitch: { class: 3, receiverSize: "2", gtwRating: 5000, twRating: 500, gtwRatingWd: 6500, twRatingWd: 650, receiverHeight: 19, pinToFascia: 4 },
     load: { occupants: 320, cargo: 120, hitchHardware: 35 },
@@ -31,7 +31,7 @@ export const DEMO_VEHICLES: Array<{ name: string } & VehiclePart> = [
     name: "Corvane Tessel crossover",
     vehicle: {
       towRating: 3500, tongueWeightLimit: 350, gvwr: 5200, curbWeight: 3900, gcwr: 8000, gawrFront: 2700, gawrRear: 2750,
-      axleWeights: { front: 2400, rear: 1925 }, wheelbase: 110, rearAxleToHitch: 40, departureAngle: 21,
+      axleWeights: { front: 2400, rear: 1925 }, wheelbase: 110, rearAxleToPin: 32, departureAngle: 21,
     },
     hitch: { class: 2, receiverSize: "2", gtwRating: 3500, twRating: 350, receiverHeight: 14, pinToFascia: 5.5 },
     load: { occupants: 300, cargo: 100, hitchHardware: 25 },

@@ -192,7 +192,8 @@ export const savedChecks = sqliteTable(
     /** What the list shows and filters by: the vehicle profile's name or the rig's own name. */
     vehicleLabel: text("vehicle_label"),
     hitchedLabel: text("hitched_label"),
-    level: text("level", { enum: ["within", "tight", "over"] }).notNull(),
+    // Results saved before core 2.0.0 read within, tight or over; "adjust" and "incomplete" come with it.
+    level: text("level", { enum: ["within", "tight", "adjust", "over", "incomplete"] }).notNull(),
     complete: integer("complete", { mode: "boolean" }).notNull(),
     units: text("units", { enum: ["imperial", "metric"] }).notNull(),
     rig: text("rig", { mode: "json" }).notNull(),

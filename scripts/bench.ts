@@ -85,7 +85,7 @@ for (let i = 0; i < 500; i++) {
       gawrRear: Math.round(gvwr * 0.6),
       axleWeights: { front: Math.round(curb * 0.56), rear: Math.round(curb * 0.44) + 300 },
       wheelbase: between(100, 170),
-      rearAxleToHitch: between(35, 60),
+      rearAxleToPin: between(27, 52),
       departureAngle: between(15, 30),
     },
     hitch: hitchFor(tow),
@@ -123,7 +123,7 @@ for (let i = 0; i < 200; i++) {
 const vehicleParts = vehicles.map((v) => profilePart({ units: "imperial", data: { ...v } }, "imperial"));
 const trailerParts = trailers.map((t) => profilePart({ units: "imperial", data: { ...t } }, "imperial"));
 const TIGHT = 0.1;
-const counts: Record<string, number> = { within: 0, tight: 0, over: 0 };
+const counts: Record<string, number> = { within: 0, tight: 0, adjust: 0, over: 0, incomplete: 0 };
 // The baseline: the same 100,000 rigs, composed beforehand, one fast evaluation each.
 const width = trailerParts.length;
 const composed: RigInput[] = [];

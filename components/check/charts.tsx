@@ -27,6 +27,7 @@ import type { AxleLoadsResult, CheckStatus, EnvelopeResult, Link, TongueShareRes
 const TONE: Record<CheckStatus, string> = {
   within: "var(--color-within)",
   tight: "var(--color-tight)",
+  adjust: "var(--color-adjust)",
   over: "var(--color-over)",
   incomplete: "var(--color-unknown)",
 };

@@ -10,7 +10,7 @@ import Link from "next/link";
 import { FormProvider, useForm, useWatch, type Control, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { ChevronDown, CircleAlert, Save, UserRound } from "lucide-react";
-import { Button, Card, CardBody, CardHeader, Dialog, Field, FormMessage, Select, TextInput, Textarea, VerdictBadge, cn, verdictWords } from "@/components/ui";
+import { Button, Card, CardBody, CardHeader, Dialog, Field, FormMessage, Select, TextInput, Textarea, VerdictBadge, cn, levelWords } from "@/components/ui";
 import { evaluateRig, type RigInput, type RigResult, type UnitSystem, type AccessoryFitResult } from "@/lib/towing";
 import { rigInputSchema } from "@/lib/validation/rig";
 import { RigCard, UnitsProvider } from "./field-parts";
@@ -96,7 +96,7 @@ interface LiveProps {
  */
 /** The verdict sentence without its leading level word ("Over: …"), where a badge beside it already says it. */
 function withoutLevelWord(message: string): string {
-  const cut = message.match(/^[A-Z][a-z]+(?: [a-z]+)?: (.*)$/s);
+  const cut = message.match(/^(?:Adjust the set-up before towing|[A-Z][a-z]+(?: [a-z]+)?): (.*)$/s);
   if (!cut) return message;
   const rest = cut[1]!;
   return rest.charAt(0).toUpperCase() + rest.slice(1);
@@ -151,7 +151,7 @@ function LiveVerdict({ control, kind, tightMarginRatio, onJump }: LiveProps) {
           aria-controls="workbench-verdict"
           className="flex w-full items-center gap-3 text-left"
         >
-          <VerdictBadge status={level} label={waiting ? `${verdictWords[level]} (waiting)` : undefined} />
+          <VerdictBadge status={level} label={waiting ? `${levelWords[level]} (waiting)` : levelWords[level]} />
           <span className="min-w-0 flex-1 truncate text-sm text-ink">{withoutLevelWord(result.verdict.message)}</span>
           <span className="inline-flex shrink-0 items-center gap-1 text-sm font-medium text-accent-strong">
             {open ? "Hide" : "Checks"}

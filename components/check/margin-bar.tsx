@@ -8,6 +8,7 @@ import type { CheckStatus, Quantity } from "@/lib/towing";
 const tones: Record<CheckStatus, string> = {
   within: "bg-within",
   tight: "bg-tight",
+  adjust: "bg-adjust",
   over: "bg-over",
   incomplete: "bg-unknown",
 };

@@ -186,7 +186,7 @@ export function VehicleFields({ tools }: { tools?: ReactNode }) {
       <FieldGroup title="Lengths" note="A tape measure along the ground, or the owner's manual's dimensions page.">
         <FieldGrid>
           <NumField name="vehicle.wheelbase" label="Wheelbase" kind="length" help="Front axle centre to rear axle centre." />
-          <NumField name="vehicle.rearAxleToHitch" label="Rear axle to ball" kind="length" help="Rear axle centre to the ball's centre (to the pin hole for a rack or carrier), along the ground." />
+          <NumField name="vehicle.rearAxleToPin" label="Rear axle to pin hole" kind="length" help="Rear axle centre to the receiver's pin hole, along the ground: the installer's figure after fitting. The ball mount's length and any extender are added to reach the ball." />
         </FieldGrid>
       </FieldGroup>
       <FieldGroup title="Load in the vehicle" note="What rides along when it tows. Ask, or weigh.">
@@ -274,6 +274,7 @@ export function HitchFields({ kind }: { kind: HitchedKind }) {
         <FieldGrid>
           <NumField name="extender.length" label="Extender length" kind="length" help="How far it moves the pin hole back." />
           <NumField name="extender.twRating" label="Extender TW rating" kind="mass" help="The extender's label." />
+          <NumField name="extender.gtwRating" label="Extender GTW rating" kind="mass" help="The extender's label, if it gives one." />
         </FieldGrid>
       </FieldGroup>
     </>

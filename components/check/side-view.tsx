@@ -91,12 +91,14 @@ function SideViewImpl({ rig, kind, accessoryAngle, className }: SideViewProps) {
   const recv = toIn(h.receiverHeight) ?? NOMINAL_RECEIVER_IN;
   if (!receiverKnown) missing.push("receiver height");
   const side = RECEIVER_SIDE_IN[h.receiverSize ?? "2"] ?? 2;
-  const overhangKnown = v.rearAxleToHitch !== undefined;
-  const overhang = toIn(v.rearAxleToHitch) ?? NOMINAL_OVERHANG_IN;
-  if (!overhangKnown) missing.push(kind === "trailer" ? "rear axle to ball" : "rear axle to pin");
   const mountLength = toIn(bm.length);
-  // The core measures the trailer's overhang to the ball, the accessory's to the pin.
-  const pin = kind === "trailer" ? overhang - (mountLength ?? NOMINAL_MOUNT_LENGTH_IN) : overhang;
+  // The one measured figure is the rear axle to the pin hole; an older rig may carry the ball's figure instead.
+  const legacyBall = v.rearAxleToPin === undefined && kind === "trailer" ? toIn(v.rearAxleToHitch) : undefined;
+  const pinIn = toIn(v.rearAxleToPin) ?? (kind === "trailer" ? undefined : toIn(v.rearAxleToHitch));
+  const overhangKnown = pinIn !== undefined || legacyBall !== undefined;
+  if (!overhangKnown) missing.push("rear axle to pin hole");
+  const pin = pinIn ?? (legacyBall !== undefined ? legacyBall - ext - (mountLength ?? NOMINAL_MOUNT_LENGTH_IN) : NOMINAL_OVERHANG_IN - NOMINAL_MOUNT_LENGTH_IN);
+  const overhang = kind === "trailer" ? (legacyBall ?? pin + ext + (mountLength ?? NOMINAL_MOUNT_LENGTH_IN)) : pin;
   const fasciaKnown = h.pinToFascia !== undefined;
   const fascia = pin - (toIn(h.pinToFascia) ?? 5);
   if (!fasciaKnown) missing.push("pin hole to fascia");
@@ -247,7 +249,13 @@ function SideViewImpl({ rig, kind, accessoryAngle, className }: SideViewProps) {
           {/* dimension lines that hold in both cases */}
           {receiverKnown ? <Dim x1={X(fascia - 12)} y1={ground} x2={X(fascia - 12)} y2={Y(recv)} label={`receiver ${len(h.receiverHeight)}`} marker={marker} side="left" /> : null}
           {fasciaKnown ? <Dim x1={X(fascia)} y1={Y(recv + 6)} x2={X(pin)} y2={Y(recv + 6)} label={`pin to fascia ${len(h.pinToFascia)}`} marker={marker} /> : null}
-          {overhangKnown ? <Dim x1={X(0)} y1={ground + 18} x2={X(overhang)} y2={ground + 18} label={`rear axle to ${kind === "trailer" ? "ball" : "pin"} ${len(v.rearAxleToHitch)}`} marker={marker} side="below" /> : null}
+          {overhangKnown ? (
+            legacyBall !== undefined ? (
+              <Dim x1={X(0)} y1={ground + 18} x2={X(overhang)} y2={ground + 18} label={`rear axle to ball ${len(v.rearAxleToHitch)}`} marker={marker} side="below" />
+            ) : (
+              <Dim x1={X(0)} y1={ground + 18} x2={X(pin)} y2={ground + 18} label={`rear axle to pin ${len(v.rearAxleToPin ?? v.rearAxleToHitch)}`} marker={marker} side="below" />
+            )
+          ) : null}
           {departure !== undefined ? (
             <g>
               <line

@@ -8,7 +8,7 @@
 import { memo, useDeferredValue, useLayoutEffect, useRef, useState, type ReactNode } from "react";
 import dynamic from "next/dynamic";
 import { ChevronRight } from "lucide-react";
-import { VerdictBadge, cn, verdictWords } from "@/components/ui";
+import { VerdictBadge, cn, levelMeaning, levelWords } from "@/components/ui";
 import { formatMargin, formatQuantity, formatRatio } from "@/lib/format";
 import type {
   AccessoryFitResult,
@@ -162,8 +162,13 @@ function CheckRow({ check }: { check: AnyCheckResult }) {
       {isWeakestLink(check) ? <LinksTable check={check} /> : null}
       {isAccessory(check) ? <PartsTable check={check} /> : null}
       {showAdvice ? (
-        <div className={cn("rounded-md border-l-4 px-3 py-2", check.status === "over" ? "border-over bg-over-soft" : "border-tight bg-tight-soft")}>
-          <p className="text-[0.8125rem] font-semibold text-ink">What to do</p>
+        <div
+          className={cn(
+            "rounded-md border-l-4 px-3 py-2",
+            check.status === "over" ? "border-over bg-over-soft" : check.status === "adjust" ? "border-adjust bg-adjust-soft" : "border-tight bg-tight-soft",
+          )}
+        >
+          <p className="text-[0.8125rem] font-semibold text-ink">{check.status === "adjust" ? "Adjust before you tow" : "What to do"}</p>
           <ul className="mt-1 list-disc space-y-1 pl-5 text-sm leading-snug text-ink">
             {advice.map((a) => (
               <li key={a}>{a}</li>
@@ -254,7 +259,7 @@ function VerdictPanelImpl({ result, rig, charts = true, className, headingLevel 
     <section ref={rootRef} aria-labelledby="verdict-title" data-testid="verdict-panel" className={cn("min-w-0 space-y-4", className)}>
       {/* Only the level is announced: the numbers change on every keystroke and would drown the reader. */}
       <p aria-live="polite" aria-atomic="true" className="sr-only">
-        Verdict: {verdictWords[verdict.level]}
+        Verdict: {levelWords[verdict.level]}
       </p>
       <header className="space-y-2.5">
         <Heading id="verdict-title" className="sr-only">
@@ -266,9 +271,13 @@ function VerdictPanelImpl({ result, rig, charts = true, className, headingLevel 
           className="inline-flex transition-[opacity,translate] duration-200 starting:translate-y-1 starting:opacity-0 motion-reduce:transition-none"
           key={verdict.level}
         >
-          <VerdictBadge status={verdict.level} size="lg" />
+          <VerdictBadge status={verdict.level} label={levelWords[verdict.level]} size="lg" />
         </div>
         <p className="text-lg leading-snug font-semibold text-balance text-ink">{verdict.message}</p>
+        <p data-testid="verdict-meaning" className="text-sm text-ink-soft">
+          {levelMeaning[verdict.level]}
+          {verdict.level === "over" && verdict.adjust?.length ? " The set-up also needs adjusting." : ""}
+        </p>
         {verdict.governing ? (
           <p className="num text-sm text-ink-soft">
             Governing: <span className="font-semibold text-ink">{verdict.governing.label}</span>
@@ -278,7 +287,7 @@ function VerdictPanelImpl({ result, rig, charts = true, className, headingLevel 
         ) : null}
         {!verdict.complete ? (
           <p className="text-sm text-ink-soft">
-            Still lacking figures: {incompleteTitles.join(", ")}. The verdict cannot be better than tight until they are in.
+            Still lacking figures: {incompleteTitles.join(", ")}. The rig cannot be confirmed until they are in.
           </p>
         ) : null}
         <p className="text-xs text-ink-faint">Tight means less than {formatRatio(verdict.tightMarginRatio, 0)} of a limit left.</p>

@@ -2,7 +2,7 @@
 import Link from "next/link";
 import { useState } from "react";
 import useSWR from "swr";
-import { Button, Card, CardBody, Field, TextInput, VerdictBadge, cn } from "@/components/ui";
+import { Button, Card, CardBody, Field, TextInput, VerdictBadge, cn, levelWords } from "@/components/ui";
 import { fetchJson } from "@/lib/client/fetcher";
 import { fleetMatrixKey } from "@/lib/fleet/keys";
 import { formatNumber } from "@/lib/format";
@@ -19,6 +19,15 @@ export interface PairingMatrixProps {
 const PAGE_SIZE = 25;
 const COL_PAGE_SIZE = 8;
 
+/** The set-up each check asks to adjust, in a few words for a cell. */
+const SETUP_WORDS: Partial<Record<string, string>> = {
+  "ball-mount": "ball mount drop",
+  "weight-distribution": "weight distribution",
+  "accessory-fit": "accessory fit",
+  "tongue-share": "trailer loading",
+  "weakest-link": "ball size",
+};
+
 function cellHref(vehicleId: string, column: MatrixColumn): string {
   return `/check?vehicle=${encodeURIComponent(vehicleId)}&${column.kind === "trailers" ? "trailer" : "accessory"}=${encodeURIComponent(column.id)}`;
 }
@@ -32,7 +41,13 @@ function CellLink({ vehicle, column, cell }: { vehicle: { id: string; name: stri
       data-level={cell.level}
       className="flex min-w-36 flex-col gap-1 rounded-md p-1.5 hover:bg-sunken focus-visible:outline-2 focus-visible:outline-accent"
     >
-      <VerdictBadge status={cell.level} size="sm" label={cell.complete ? undefined : `${cell.level === "over" ? "Over" : "Tight"} · data missing`} />
+      <VerdictBadge status={cell.level} size="sm" label={levelWords[cell.level]} />
+      {cell.adjust?.length && cell.level !== "adjust" ? (
+        <span className="text-xs font-medium text-adjust">Set-up to adjust too</span>
+      ) : null}
+      {cell.adjust?.length ? (
+        <span className="text-xs leading-snug text-ink-soft">Adjust: {cell.adjust.map((id) => SETUP_WORDS[id] ?? id).join(", ")}</span>
+      ) : null}
       {/* Read after the visible words, so the link's name holds what is on it (label in name). */}
       <span className="sr-only">
         {vehicle.name} with {column.name}. Open the check.
@@ -90,7 +105,9 @@ export function PairingMatrix({ initial, initialKey, initialFilters, cautions }:
         <p className="flex flex-wrap items-center gap-2 text-sm text-ink-soft" aria-live="polite">
           <VerdictBadge status="within" size="sm" label={`${data.counts.within} within`} />
           <VerdictBadge status="tight" size="sm" label={`${data.counts.tight} tight`} />
+          <VerdictBadge status="adjust" size="sm" label={`${data.counts.adjust ?? 0} to adjust`} />
           <VerdictBadge status="over" size="sm" label={`${data.counts.over} over`} />
+          <VerdictBadge status="incomplete" size="sm" label={`${data.counts.incomplete ?? 0} not confirmed`} />
         </p>
       ) : null}
       <Card>

@@ -24,6 +24,7 @@ export function zeroScale(max: number, count = 4): Scale {
 export const FILL: Record<CheckStatus, string> = {
   within: "fill-within",
   tight: "fill-tight",
+  adjust: "fill-adjust",
   over: "fill-over",
   incomplete: "fill-unknown",
 };

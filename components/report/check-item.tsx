@@ -184,7 +184,7 @@ export function printedLines(check: AnyCheckResult): number {
 export function CheckItem({ check, columnBreak = false }: { check: AnyCheckResult; columnBreak?: boolean }) {
   const words = CHECK_WORDS[check.id] ?? { title: check.title, line: "" };
   const headingId = `report-check-${check.id}`;
-  const problem = check.status === "over" || check.status === "tight";
+  const problem = check.status === "over" || check.status === "adjust" || check.status === "tight";
   return (
     <li
       aria-labelledby={headingId}
@@ -192,7 +192,7 @@ export function CheckItem({ check, columnBreak = false }: { check: AnyCheckResul
       className={cn(
         "min-w-0 break-inside-avoid rounded-card border bg-panel px-4 py-3.5",
         "print:rounded-none print:border-0 print:border-t print:bg-transparent print:px-0 print:py-1",
-        check.status === "over" ? "border-over/50" : check.status === "tight" ? "border-tight/45" : "border-rule",
+        check.status === "over" ? "border-over/50" : check.status === "adjust" ? "border-adjust/45" : check.status === "tight" ? "border-tight/45" : "border-rule",
         "print:border-rule",
         columnBreak && "print:break-before-column",
       )}
@@ -227,11 +227,11 @@ export function CheckItem({ check, columnBreak = false }: { check: AnyCheckResul
         <div
           className={cn(
             "mt-3 rounded-md border-l-4 bg-sunken px-3 py-2 print:mt-0.5 print:rounded-none print:border-l-2 print:bg-transparent print:px-2 print:py-0",
-            check.status === "over" ? "border-over" : check.status === "tight" ? "border-tight" : "border-rule",
+            check.status === "over" ? "border-over" : check.status === "adjust" ? "border-adjust" : check.status === "tight" ? "border-tight" : "border-rule",
           )}
         >
           <h4 className="text-sm font-semibold print:float-left print:mr-1 print:text-[7.5pt] print:leading-[1.3]">
-            {problem ? "What to do" : "Next step"}
+            {check.status === "adjust" ? "Adjust before you tow" : problem ? "What to do" : "Next step"}
             <span className="hidden print:inline">:</span>
           </h4>
           <ul className="mt-0.5 space-y-0.5 text-sm print:mt-0 print:space-y-0 print:text-[7.5pt] print:leading-[1.3]">

@@ -8,7 +8,7 @@ import type { RigInput } from "@/lib/towing/input";
 import type { AnyCheckResult, CheckStatus, RigResult, VerdictResult } from "@/lib/towing/types";
 import { buttonClasses } from "@/components/ui/button";
 import { cn } from "@/components/ui/cn";
-import { VerdictBadge } from "@/components/ui/verdict-badge";
+import { VerdictBadge, levelWords } from "@/components/ui/verdict-badge";
 import { CheckItem, printedLines } from "./check-item";
 import { plainTitle } from "./glossary";
 import { PrintButton } from "./print-button";
@@ -45,25 +45,26 @@ const FALLBACK_CAUTIONS = [
   "Local law and a licensed installer have the last word.",
 ];
 
-const SEVERITY: Record<CheckStatus, number> = { over: 0, tight: 1, incomplete: 2, within: 3 };
+const SEVERITY: Record<CheckStatus, number> = { over: 0, adjust: 1, tight: 2, incomplete: 3, within: 4 };
 
 /** "1 Dec 2026". */
 export function formatReportDate(date: Date, timeZone?: string): string {
   return new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone }).format(date);
 }
 
-/** The verdict's sentence without a leading "Tight: " when the badge beside it already says so. */
+/** The verdict's sentence without a leading "Tight: " (or the like) when the badge beside it already says so. */
 function verdictSentence(verdict: VerdictResult): string {
-  const word = verdict.level.charAt(0).toUpperCase() + verdict.level.slice(1);
-  const text = verdict.message.startsWith(`${word}: `) ? verdict.message.slice(word.length + 2) : verdict.message;
+  const text = verdict.message.replace(/^(Over|Tight|Within|Not confirmed|Adjust the set-up before towing): /, "");
   return text.charAt(0).toUpperCase() + text.slice(1);
 }
 
-/** One plain line on what the level means. */
+/** One plain line on what the level means: a rating exceeded and a set-up to adjust never share words. */
 function levelMeaning(verdict: VerdictResult): string {
   const share = formatRatio(verdict.tightMarginRatio, 0);
-  if (verdict.level === "over") return "Over: at least one rating is exceeded — do not tow like this.";
-  if (!verdict.complete && verdict.levelFromCheckedOnly === "within") {
+  if (verdict.level === "over") return "Over: a rating is exceeded — do not tow like this.";
+  if (verdict.level === "adjust") return "Adjust the set-up: no rating is exceeded, but the set-up needs adjusting before you tow.";
+  // A result saved before "not confirmed" had its own level read "tight" with data missing.
+  if (verdict.level === "incomplete" || (!verdict.complete && verdict.levelFromCheckedOnly === "within")) {
     return "Not confirmed yet: the rig cannot be called within until every figure is in.";
   }
   if (verdict.level === "tight") return `Tight: it fits, with less than ${share} left on at least one rating.`;
@@ -73,7 +74,9 @@ function levelMeaning(verdict: VerdictResult): string {
 const TONE_PANEL: Record<VerdictResult["level"], string> = {
   within: "border-within/35 bg-within-soft/60",
   tight: "border-tight/40 bg-tight-soft/60",
+  adjust: "border-adjust/45 bg-adjust-soft/60",
   over: "border-over/50 bg-over-soft/60",
+  incomplete: "border-dashed border-unknown/50 bg-unknown-soft/60",
 };
 
 /** Index of the first check of the second printed column: the split that evens the two columns out. */
@@ -111,6 +114,8 @@ export function ResultReport({ shopName, createdAt, customerName, rig, result, q
   const split = columnSplit(checks);
   const figures = reportFigures(result, rig);
   const missingTitles = verdict.incomplete.map(plainTitle);
+  // Results saved before the set-up status carry no `adjust` list.
+  const adjustTitles = (verdict.adjust ?? []).map(plainTitle);
 
   return (
     <article
@@ -148,10 +153,15 @@ export function ResultReport({ shopName, createdAt, customerName, rig, result, q
           Verdict
         </h2>
         <div className="flex flex-col items-start gap-3 print:flex-row print:items-center print:gap-3">
-          <VerdictBadge status={verdict.level} size="lg" className="print:h-7 print:text-[9pt]" />
+          <VerdictBadge status={verdict.level} label={levelWords[verdict.level]} size="lg" className="print:h-7 print:text-[9pt]" />
           <p className="text-xl leading-snug font-semibold text-balance sm:text-2xl print:text-[11pt]">{verdictSentence(verdict)}</p>
         </div>
         <p className="mt-2 text-[0.9375rem] text-ink-soft print:mt-0.5 print:text-[8.5pt]">{levelMeaning(verdict)}</p>
+        {adjustTitles.length && verdict.level !== "adjust" ? (
+          <p className="mt-2 text-[0.9375rem] print:mt-0.5 print:text-[8.5pt]">
+            The set-up also needs adjusting before you tow: {listWords(adjustTitles.map((title) => title.toLowerCase()))}.
+          </p>
+        ) : null}
         {!verdict.complete && missingTitles.length ? (
           <p className="mt-2 text-[0.9375rem] print:mt-0.5 print:text-[8.5pt]">
             {missingTitles.length === 1 ? "One check could not be done" : `${missingTitles.length} checks could not be done`} because

@@ -22,12 +22,14 @@ const RIGHT = WIDTH - 4;
 const STROKE: Record<CheckStatus, string> = {
   within: "stroke-within",
   tight: "stroke-tight",
+  adjust: "stroke-adjust",
   over: "stroke-over",
   incomplete: "stroke-unknown",
 };
 const FILL: Record<CheckStatus, string> = {
   within: "fill-within",
   tight: "fill-tight",
+  adjust: "fill-adjust",
   over: "fill-over",
   incomplete: "fill-unknown",
 };

@@ -15,7 +15,7 @@ export { Dialog } from "./dialog";
 export type { DialogProps } from "./dialog";
 export { ToastProvider, useToast } from "./toast";
 export type { ToastProviderProps, ToastOptions, ToastTone, ToastApi } from "./toast";
-export { VerdictBadge, verdictWords } from "./verdict-badge";
+export { VerdictBadge, verdictWords, levelWords, levelMeaning } from "./verdict-badge";
 export type { VerdictBadgeProps, VerdictStatus, VerdictBadgeSize } from "./verdict-badge";
 export { FormMessage } from "./form-message";
 export type { FormMessageProps, FormMessageTone } from "./form-message";

@@ -1,23 +1,43 @@
 import type { HTMLAttributes } from "react";
-import { CircleCheck, OctagonX, SquareDashed, TriangleAlert, type LucideIcon } from "lucide-react";
+import { CircleCheck, OctagonX, SquareDashed, TriangleAlert, Wrench, type LucideIcon } from "lucide-react";
 import { cn } from "./cn";
 
-export type VerdictStatus = "within" | "tight" | "over" | "incomplete";
+export type VerdictStatus = "within" | "tight" | "adjust" | "over" | "incomplete";
 export type VerdictBadgeSize = "sm" | "md" | "lg";
 
 /** The words for each status; screens that need other wording pass `label`. */
 export const verdictWords: Record<VerdictStatus, string> = {
   within: "Within",
   tight: "Tight",
+  adjust: "Adjust the set-up",
   over: "Over",
   incomplete: "Not enough data",
 };
 
-// Each status has its own outline (round, three-sided, eight-sided, broken) so a greyscale printout or a
-// colour-blind reader still tells them apart without the tone.
+/** The words for a whole rig's level: "incomplete" there means the rig cannot be confirmed yet. */
+export const levelWords: Record<VerdictStatus, string> = {
+  within: "Within",
+  tight: "Tight",
+  adjust: "Adjust the set-up",
+  over: "Over: do not tow",
+  incomplete: "Not confirmed",
+};
+
+/** What each level means, in a sentence anyone can read. */
+export const levelMeaning: Record<VerdictStatus, string> = {
+  within: "Every rating has room to spare.",
+  tight: "It fits, with little room left on at least one rating.",
+  adjust: "No rating is exceeded, but the set-up needs adjusting before you tow.",
+  over: "A rating is exceeded: do not tow like this.",
+  incomplete: "Not confirmed yet: some figures are still missing.",
+};
+
+// Each status has its own outline (round, three-sided, a spanner, eight-sided, broken) so a greyscale printout
+// or a colour-blind reader still tells them apart without the tone.
 const statuses: Record<VerdictStatus, { icon: LucideIcon; tone: string }> = {
   within: { icon: CircleCheck, tone: "border-within/35 bg-within-soft text-within" },
   tight: { icon: TriangleAlert, tone: "border-tight/40 bg-tight-soft text-tight" },
+  adjust: { icon: Wrench, tone: "border-double border-[3px] border-adjust/45 bg-adjust-soft text-adjust" },
   over: { icon: OctagonX, tone: "border-over/50 bg-over-soft text-over" },
   incomplete: { icon: SquareDashed, tone: "border-dashed border-unknown/50 bg-unknown-soft text-unknown" },
 };

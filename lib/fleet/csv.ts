@@ -284,7 +284,7 @@ export function templateCsv(kind: ProfileKind): string {
   const examples: Record<ProfileKind, Record<string, string>> = {
     vehicles: {
       name: "Crew truck 14", units: "imperial", gvwr: "9900", gawr_front: "4800", gawr_rear: "6000", gcwr: "18000", tow_max: "9000",
-      tongue_max: "900", curb_weight: "6400", wheelbase: "160", axle_to_ball: "52", hitch_class: "4", receiver_opening: "2",
+      tongue_max: "900", curb_weight: "6400", wheelbase: "160", axle_to_pin: "44", hitch_class: "4", receiver_opening: "2",
       hitch_gtw: "10000", hitch_tw: "1000", receiver_height: "20.5", pin_to_fascia: "5",
     },
     trailers: {

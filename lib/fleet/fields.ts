@@ -66,7 +66,7 @@ export const VEHICLE_FIELDS: ProfileField[] = [
   num("vehicle.axleWeights.front", "weighed_front", "Weights", "Weighed unhitched, loaded as it travels."),
   num("vehicle.axleWeights.rear", "weighed_rear", "Weights", "Weighed unhitched, loaded as it travels."),
   num("vehicle.wheelbase", "wheelbase", "Measurements", "Centre of the front wheel to centre of the rear wheel."),
-  num("vehicle.rearAxleToHitch", "axle_to_ball", "Measurements", "Rear axle centre to the ball centre."),
+  num("vehicle.rearAxleToPin", "axle_to_pin", "Measurements", "Rear axle centre to the receiver's pin hole: the installer's figure after fitting."),
   num("vehicle.departureAngle", "departure_angle", "Measurements"),
   { path: "hitch.class", column: "hitch_class", label: "Hitch class", type: "integer", choices: ["1", "2", "3", "4", "5"], group: "Hitch" },
   choice("hitch.receiverSize", "receiver_opening", "Receiver size (in)", RECEIVER_SIZES, "Hitch"),

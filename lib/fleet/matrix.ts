@@ -5,12 +5,14 @@
  */
 import { convertRig, evaluateRigFast } from "../towing/index";
 import type { RigInput } from "../towing/input";
-import type { Governing, Margin, VerdictLevel } from "../towing/types";
+import type { CheckId, Governing, Margin, VerdictLevel } from "../towing/types";
 import type { UnitSystem } from "../towing/units";
 
 export interface MatrixCell {
   level: VerdictLevel;
   complete: boolean;
+  /** The checks whose set-up needs adjusting (a ball mount, spring bars, a raised shank), whatever the level. */
+  adjust: CheckId[];
   governing?: Pick<Governing, "label" | "value" | "unit"> & { checkId: string };
   margin?: Margin;
 }
@@ -31,6 +33,7 @@ export function evaluatePair(units: UnitSystem, vehicle: Partial<RigInput>, hitc
   return {
     level: result.level,
     complete: result.complete,
+    adjust: result.adjust,
     governing: governing ? { label: governing.label, value: governing.value, unit: governing.unit, checkId: governing.checkId } : undefined,
     margin,
   };

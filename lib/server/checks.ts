@@ -4,7 +4,7 @@ import { getDb } from "@/db/client";
 import { savedChecks, users } from "@/db/schema";
 import { can } from "@/lib/roles";
 import { evaluateRig } from "@/lib/towing";
-import type { RigResult } from "@/lib/towing/types";
+import type { RigResult, VerdictLevel } from "@/lib/towing/types";
 import type { RigInput } from "@/lib/towing/input";
 import type { ListChecksQuery, SaveCheckInput } from "@/lib/validation/checks";
 import type { AccessContext } from "./access";
@@ -68,7 +68,7 @@ export interface CheckListRow {
   customerName: string | null;
   vehicleLabel: string | null;
   hitchedLabel: string | null;
-  level: "within" | "tight" | "over";
+  level: VerdictLevel;
   complete: boolean;
   createdBy: string | null;
 }
@@ -98,7 +98,7 @@ export async function listChecks(access: AccessContext, query: ListChecksQuery):
     createdAt: savedChecks.createdAt,
     customerName: savedChecks.customerName,
     vehicleLabel: savedChecks.vehicleLabel,
-    level: sql`CASE ${savedChecks.level} WHEN 'within' THEN 0 WHEN 'tight' THEN 1 ELSE 2 END`,
+    level: sql`CASE ${savedChecks.level} WHEN 'within' THEN 0 WHEN 'tight' THEN 1 WHEN 'adjust' THEN 2 WHEN 'incomplete' THEN 3 ELSE 4 END`,
   }[query.sort];
   const order = query.dir === "asc" ? asc(column) : desc(column);
   const [totalRow, rows] = await Promise.all([

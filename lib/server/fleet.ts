@@ -326,7 +326,7 @@ export async function fleetMatrix(access: AccessContext, query: MatrixQuery): Pr
   let counts: MatrixPage["counts"] = null;
   if (entry.cells) {
     const cells = entry.cells;
-    counts = { within: 0, tight: 0, over: 0 };
+    counts = { within: 0, tight: 0, adjust: 0, over: 0, incomplete: 0 };
     for (const r of rowIndexes) for (const c of colIndexes) counts[cells[r * width + c]!.level]++;
     if (query.level) {
       const level = query.level;

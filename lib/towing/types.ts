@@ -14,6 +14,9 @@ export type CheckStatus = "within" | "tight" | "adjust" | "over" | "incomplete";
  */
 export type VerdictLevel = "within" | "tight" | "adjust" | "over" | "incomplete";
 
+/** Every level a rig can read, in the order lists and filters show them. */
+export const VERDICT_LEVELS = ["within", "tight", "adjust", "over", "incomplete"] as const satisfies readonly VerdictLevel[];
+
 /** Every status from the least to the most severe, as the verdict ranks them. */
 export const STATUS_ORDER = ["within", "tight", "adjust", "incomplete", "over"] as const;
 

@@ -137,8 +137,10 @@ export const LIBRARY: readonly LibraryExample[] = [
     rig: {
       units: "imperial",
       name: "Marit's pickup with a travel trailer (invented)",
-      vehicle: { gawrFront: 3700, gawrRear: 4000, axleWeights: { front: 3100, rear: 2600 }, wheelbase: 145, rearAxleToHitch: 50 },
+      // 41 in to the pin hole + a 9 in ball mount = the ball 50 in behind the rear axle
+      vehicle: { gawrFront: 3700, gawrRear: 4000, axleWeights: { front: 3100, rear: 2600 }, wheelbase: 145, rearAxleToPin: 41 },
       trailer: { type: "travel", grossTrailerWeight: 6400, tongueWeight: 800, tongueWeightBasis: "measured" },
+      ballMount: { length: 9 },
     },
   },
   {
@@ -189,7 +191,7 @@ export const LIBRARY: readonly LibraryExample[] = [
     rig: {
       units: "imperial",
       name: "Wren's hatchback with a platform rack (invented)",
-      vehicle: { tongueWeightLimit: 200, gvwr: 4100, curbWeight: 3000, rearAxleToHitch: 22, departureAngle: 21 },
+      vehicle: { tongueWeightLimit: 200, gvwr: 4100, curbWeight: 3000, rearAxleToPin: 22, departureAngle: 21 },
       hitch: { class: 1, receiverSize: "1-1/4", gtwRating: 2000, twRating: 200, receiverHeight: 13, pinToFascia: 6 },
       accessory: { type: "platform-rack", weight: 40, loadWeight: 60, loadCenterFromPin: 12, foldClearance: 4, lowestPointBelowShankTop: 3, lowestPointBehindPin: 8, shankRise: 0 },
     },

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { rigInputSchema } from "./rig";
+import { VERDICT_LEVELS } from "../towing/types";
 
 const optionalText = (max: number, label: string) =>
   z
@@ -31,7 +32,7 @@ export const listChecksQuerySchema = z.object({
   customer: z.string().trim().max(120).optional(),
   from: dateOnly,
   to: dateOnly,
-  level: z.enum(["within", "tight", "over"]).optional().or(z.literal("").transform(() => undefined)),
+  level: z.enum(VERDICT_LEVELS).optional().or(z.literal("").transform(() => undefined)),
   sort: z.enum(CHECK_SORTS).default("createdAt"),
   dir: z.enum(["asc", "desc"]).default("desc"),
   page: z.coerce.number().int().min(1).max(100_000).default(1),

@@ -6,6 +6,7 @@
 import { z } from "zod";
 import { buildProfileData, getPath, type ProfileKind } from "../fleet/fields";
 import { rigInputSchema } from "../towing/input";
+import { VERDICT_LEVELS } from "../towing/types";
 
 const [imperial, metric] = rigInputSchema.options.map((option) => option.shape) as [
   (typeof rigInputSchema.options)[0]["shape"],
@@ -106,12 +107,12 @@ export const listProfilesQuerySchema = z.object({
   archived: z.enum(["include", "only", "exclude"]).default("exclude"),
 });
 
-export const MATRIX_LEVELS = ["within", "tight", "over"] as const;
+export const MATRIX_LEVELS = VERDICT_LEVELS;
 
 export const matrixQuerySchema = z.object({
   vehicle: z.string().trim().max(120).optional(),
   hitched: z.string().trim().max(120).optional(),
-  level: z.enum(MATRIX_LEVELS, { error: "Verdict: within, tight or over." }).optional().or(z.literal("").transform(() => undefined)),
+  level: z.enum(MATRIX_LEVELS, { error: "Verdict: within, tight, adjust the set-up, over or not confirmed." }).optional().or(z.literal("").transform(() => undefined)),
   page: z.coerce.number({ error: "Page: a whole number." }).int().min(1).max(10_000).default(1),
   pageSize: z.coerce.number({ error: "Page size: a whole number." }).int().min(5).max(100).default(25),
   colPage: z.coerce.number({ error: "Column page: a whole number." }).int().min(1).max(10_000).default(1),

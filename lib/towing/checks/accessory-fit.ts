@@ -267,7 +267,16 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
     status === "over"
       ? `A rating is exceeded: ${fW(c, d.hitchLoad ?? 0)} on the receiver, more than the ${low ? low[1].toLowerCase() : "rating"} of ${low ? fW(c, low[2]) : "?"}.`
       : status === "adjust"
-        ? `The accessory needs a different set-up: ${parts.filter((p) => p.status === "adjust").map((p) => p.label.toLowerCase()).join(" and ")}.`
+        ? [
+            groundPart.status === "adjust" && ground !== undefined && ground <= EPS
+              ? "The accessory's lowest point would touch the ground: a raised shank is needed"
+              : groundPart.status === "adjust" && angle !== undefined && v.departureAngle !== undefined
+                ? `The accessory sits at ${fA(angle)} from the rear tyre, below the vehicle's ${fA(v.departureAngle)} departure angle: about ${fL(c, riseNeeded ?? 0)} more shank rise is needed`
+                : "",
+            parts.find((p) => p.id === "fold")?.status === "adjust" ? "It does not fold clear of the bumper" : "",
+          ]
+            .filter(Boolean)
+            .join("; ") + "."
       : status === "incomplete"
         ? "Some measurements are missing to check the accessory's fit."
         : status === "tight"

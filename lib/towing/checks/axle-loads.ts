@@ -3,7 +3,7 @@
  * a vehicle with wheelbase WB lifts P·OH/WB off the front axle and puts P·(WB + OH)/WB on the rear axle.
  * Each axle is compared with its GAWR; the front axle with the larger of its unhitched and hitched loads.
  */
-import { fP, fW, govW, iL, iN, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, ratioOf, rL, rW, statusOf, withMissing, worst, type Ctx } from "../context";
+import { fL, fP, fW, govW, iL, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
 import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
 import { need } from "../missing";
 import type { AxleLoadsResult, CheckStatus, MissingField, Step } from "../types";
@@ -81,15 +81,13 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
     result.rearChange = qW(c, change.rear);
     if (c.detail) {
       const ohLabel = d.hasAccessory ? "Rear axle to the load's centre" : "Rear axle to ball";
-      if (!d.hasAccessory && d.overhangFrom === "pin")
-        steps.push({
-          id: "overhang",
-          title: "Rear axle to the ball",
-          formulaWords: "Rear axle to the receiver pin hole, plus the extender, plus the ball mount's length",
-          formula: "P + e + L_mount",
-          inputs: [iL(c, "P", "Rear axle to pin hole", d.pin!), iL(c, "e", "Extender", rig.extender?.length ?? 0), iL(c, "L_mount", "Ball mount length", rig.ballMount!.length!)],
-          result: rL(c, "OH", d.overhang),
-        });
+      // Geometry: the ball sits the extender's and the ball mount's length behind the pin hole.
+      const ohNote =
+        !d.hasAccessory && d.overhangFrom === "pin"
+          ? `Rear axle to ball: ${fL(c, d.pin!)} to the pin hole + ${fL(c, rig.extender?.length ?? 0)} extender + ${fL(c, rig.ballMount!.length!)} ball mount = ${fL(c, d.overhang)}.`
+          : d.overhangFrom === "ball-as-measured"
+            ? "Rear axle to ball as measured on the rig (an older figure)."
+            : undefined;
       steps.push(
         {
           id: "front-change",
@@ -98,6 +96,7 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
           formula: `-${sym} * OH / WB`,
           inputs: [iW(c, sym, label, p), iL(c, "OH", ohLabel, d.overhang), iL(c, "WB", "Wheelbase", v.wheelbase)],
           result: rW(c, "dF", change.front),
+          note: ohNote,
         },
         {
           id: "rear-change",

@@ -111,7 +111,7 @@ export function checkBallMount(d: Derived, c: Ctx): BallMountResult | null {
       ? "Measure the receiver height and the coupler height to size the ball mount."
       : drop === undefined
         ? `A ${word(needed)} keeps the trailer level; the nearest common size is a ${word(nearestCommonDrop(needed))}.`
-        : result.status === "over"
+        : result.status === "adjust"
           ? `The ball mount's ${word(drop)} leaves the trailer ${fL(c, Math.abs(drop - needed))} off level; a ${word(needed)} is needed.`
           : result.status === "tight"
             ? `The ball mount's ${word(drop)} leaves the trailer ${fL(c, Math.abs(drop - needed))} off level, at the edge of the ${fL(c, LEVEL_TOLERANCE_IN)} allowed; a ${word(needed)} would level it.`

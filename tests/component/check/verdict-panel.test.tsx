@@ -1,4 +1,5 @@
 // @vitest-environment happy-dom
+import { readFileSync } from "node:fs";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { act, cleanup, render, screen, within } from "@testing-library/react";
 import { VerdictPanel } from "@/components/check/verdict-panel";
@@ -42,9 +43,10 @@ describe("VerdictPanel", () => {
     render(<VerdictPanel result={result} />);
     const level = screen.getByTestId("verdict-level");
     expect(level.getAttribute("data-level")).toBe("over");
-    expect(level.textContent).toBe("Over");
+    expect(level.textContent).toBe("Over: do not tow");
     expect(screen.getByText(result.verdict.message)).toBeTruthy();
-    expect(result.verdict.message).toMatch(/^Over: hitch rating/i);
+    expect(result.verdict.message).toMatch(/^Over: a rating is exceeded, do not tow like this: hitch rating/i);
+    expect(screen.getByTestId("verdict-meaning").textContent).toMatch(/^A rating is exceeded: do not tow like this\./);
     expect(screen.getByText(/Governing:/).textContent).toContain("Hitch rating — 3,500 lb");
   });
 
@@ -120,7 +122,7 @@ describe("VerdictPanel", () => {
   it("announces the level only, and stamps when it was drawn", () => {
     const { rerender } = render(<VerdictPanel result={result} />);
     const live = document.querySelector("[aria-live=polite]")!;
-    expect(live.textContent).toBe("Verdict: Over");
+    expect(live.textContent).toBe("Verdict: Over: do not tow");
     const panel = screen.getByTestId("verdict-panel");
     const first = Number(panel.getAttribute("data-evaluated-at"));
     expect(first).toBeGreaterThan(0);
@@ -129,5 +131,23 @@ describe("VerdictPanel", () => {
     expect(Number(panel.getAttribute("data-evaluated-at"))).toBeGreaterThanOrEqual(first);
     expect(screen.getByTestId("verdict-level").getAttribute("data-level")).not.toBe("over");
     expect(live.textContent).not.toContain("3,000");
+  });
+});
+
+describe("VerdictPanel with a set-up to adjust", () => {
+  it("says adjust the set-up, not over, for a ball mount that leaves the trailer off level", () => {
+    // Source: boating publication how-to: receiver 21 in − coupler 18 in = 3 in drop needed; an 8 in mount leaves
+    // it 5 in off level (the 1 in allowance is common practice, no published source): a set-up to adjust
+    const camper = JSON.parse(readFileSync("tests/fixtures/rigs/camper-on-pickup.json", "utf8")) as { ballMount: object };
+    const adjustRig = rig({ ...camper, ballMount: { ...camper.ballMount, drop: 8 } });
+    const res = evaluateRig(adjustRig);
+    render(<VerdictPanel result={res} />);
+    const level = screen.getByTestId("verdict-level");
+    expect(level.getAttribute("data-level")).toBe("adjust");
+    expect(level.textContent).toBe("Adjust the set-up");
+    expect(screen.getByTestId("verdict-meaning").textContent).toBe("No rating is exceeded, but the set-up needs adjusting before you tow.");
+    const row = screen.getByTestId("check-ball-mount");
+    expect(row.getAttribute("data-status")).toBe("adjust");
+    expect(within(row).getByText("Adjust before you tow")).toBeTruthy();
   });
 });

@@ -103,12 +103,12 @@ describe("ResultReport header and verdict", () => {
   it("explains the level the core gave, with the core's own sentence", () => {
     const { result } = renderReport(fixture("boat-on-suv"));
     const { level, message } = result.verdict;
-    const word = { within: "Within", tight: "Tight", over: "Over" }[level];
+    const word = { within: "Within", tight: "Tight", adjust: "Adjust the set-up", over: "Over: do not tow", incomplete: "Not confirmed" }[level];
     const verdict = screen.getByRole("region", { name: "Verdict" });
     expect(verdict.querySelector(`[data-status="${level}"]`)?.textContent).toBe(word);
-    const sentence = message.startsWith(`${word}: `) ? message.slice(word.length + 2) : message;
+    const sentence = message.replace(/^(Over|Tight|Within|Not confirmed|Adjust the set-up before towing): /, "");
     expect(within(verdict).getByText(sentence.charAt(0).toUpperCase() + sentence.slice(1))).toBeTruthy();
-    expect(within(verdict).getByText(new RegExp(`^${word}: `))).toBeTruthy();
+    expect(within(verdict).getByText(/^(Within|Tight|Over|Adjust the set-up|Not confirmed yet): /)).toBeTruthy();
   });
 
   it("says a rig with room everywhere is within", () => {
@@ -127,8 +127,28 @@ describe("ResultReport header and verdict", () => {
     const { result } = renderReport(variant("camper-on-pickup", { "trailer.grossTrailerWeight": 9600 }));
     expect(result.verdict.level).toBe("over");
     const verdict = screen.getByRole("region", { name: "Verdict" });
-    expect(verdict.querySelector('[data-status="over"]')?.textContent).toBe("Over");
-    expect(within(verdict).getByText("Over: at least one rating is exceeded — do not tow like this.")).toBeTruthy();
+    expect(verdict.querySelector('[data-status="over"]')?.textContent).toBe("Over: do not tow");
+    expect(within(verdict).getByText("Over: a rating is exceeded — do not tow like this.")).toBeTruthy();
+  });
+
+  it("says a set-up to adjust apart from a rating exceeded", () => {
+    // Geometry: lowest point 12 − 3 = 9 in up, 34 + 30 = 64 in behind the axle: atan(9 / 64) = 8.0°, below the
+    // hatchback's 20° departure angle (49 CFR 523.2): a raised shank to fit, not a rating exceeded
+    const { result } = renderReport(fixture("bike-rack-on-small-car"));
+    expect(result.verdict.level).toBe("adjust");
+    const verdict = screen.getByRole("region", { name: "Verdict" });
+    expect(verdict.querySelector('[data-status="adjust"]')?.textContent).toBe("Adjust the set-up");
+    expect(within(verdict).getByText("Adjust the set-up: no rating is exceeded, but the set-up needs adjusting before you tow.")).toBeTruthy();
+    expect(verdict.textContent).not.toMatch(/rating is exceeded —|do not tow like this/);
+    const item = checkItem(CHECK_WORDS["accessory-fit"].title);
+    expect(within(item).getByRole("heading", { level: 4, name: /^Adjust before you tow/ })).toBeTruthy();
+  });
+
+  it("says an over rig also needs its set-up adjusted", () => {
+    const { result } = renderReport(variant("camper-on-pickup", { "trailer.grossTrailerWeight": 9600, "ballMount.drop": 0 }));
+    expect(result.verdict.level).toBe("over");
+    expect(result.verdict.adjust).toContain("ball-mount");
+    expect(screen.getByRole("region", { name: "Verdict" }).textContent).toMatch(/The set-up also needs adjusting before you tow: .*ball/);
   });
 
   it("names, in plain words, the checks that lacked data", () => {
@@ -166,7 +186,7 @@ describe("ResultReport rig and checks", () => {
       const item = checkItem(CHECK_WORDS[check.id].title);
       expect(item.getAttribute("data-status")).toBe(check.status);
       const badge = item.querySelector(`[data-status="${check.status}"]:not(li)`);
-      expect(badge?.textContent, check.id).toBe({ within: "Within", tight: "Tight", over: "Over", incomplete: "Not enough data" }[check.status]);
+      expect(badge?.textContent, check.id).toBe({ within: "Within", tight: "Tight", adjust: "Adjust the set-up", over: "Over", incomplete: "Not enough data" }[check.status]);
       expect(within(item).getByText(CHECK_WORDS[check.id].line)).toBeTruthy();
     }
     expect(result.notApplicable).toContain("accessory-fit");
@@ -200,9 +220,9 @@ describe("ResultReport rig and checks", () => {
   it("puts what to do right under a problem", () => {
     renderReport(fixture("bike-rack-on-small-car"));
     const item = checkItem(CHECK_WORDS["accessory-fit"].title);
-    expect(item.getAttribute("data-status")).toBe("over");
-    const advice = within(item).getByRole("heading", { level: 4, name: /^What to do/ }).parentElement!;
-    expect(advice.textContent).toContain("Carry less on the accessory");
+    expect(item.getAttribute("data-status")).toBe("adjust");
+    const advice = within(item).getByRole("heading", { level: 4, name: /^Adjust before you tow/ }).parentElement!;
+    expect(advice.textContent).toContain("shank rise");
     // Problems come first in the list.
     const first = within(screen.getByRole("region", { name: "Each check" })).getAllByRole("heading", { level: 3 })[0];
     expect(first?.textContent).toBe(CHECK_WORDS["accessory-fit"].title);
@@ -254,7 +274,8 @@ describe("ResultReport charts, cautions and footer", () => {
       "Accessory load against the hitch's allowance",
       "Axle loads against each axle's rating",
     ]);
-    expect(charts[0]!.textContent).toContain("Over");
+    // The load part is tight (its lever effect, a convention, passes the rating) and the ground part needs adjusting
+    expect(charts[0]!.textContent).toContain("Tight");
   });
 
   it("always shows the cautions", () => {

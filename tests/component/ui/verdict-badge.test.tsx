@@ -44,6 +44,6 @@ describe("VerdictBadge", () => {
   });
 
   it("keeps the standard words in one place for other screens", () => {
-    expect(verdictWords).toEqual({ within: "Within", tight: "Tight", over: "Over", incomplete: "Not enough data" });
+    expect(verdictWords).toEqual({ within: "Within", tight: "Tight", adjust: "Adjust the set-up", over: "Over", incomplete: "Not enough data" });
   });
 });

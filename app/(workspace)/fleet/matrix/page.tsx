@@ -4,7 +4,7 @@ import { PageHeader } from "@/components/ui";
 import { fleetMatrixKey } from "@/lib/fleet/keys";
 import { requirePage } from "@/lib/server/access";
 import { fleetMatrix } from "@/lib/server/fleet";
-import { GENERAL_CAUTIONS } from "@/lib/towing";
+import { GENERAL_CAUTIONS, VERDICT_LEVELS } from "@/lib/towing";
 import { matrixQuerySchema } from "@/lib/validation/fleet";
 
 export const metadata: Metadata = { title: "Fleet pairings" };
@@ -13,7 +13,7 @@ export default async function MatrixPage({ searchParams }: { searchParams: Promi
   const access = await requirePage("fleet.read", "/fleet/matrix");
   const params = await searchParams;
   const text = (value: unknown) => (typeof value === "string" ? value.slice(0, 120) : "");
-  const level = ["within", "tight", "over"].includes(text(params.level)) ? text(params.level) : "";
+  const level = (VERDICT_LEVELS as readonly string[]).includes(text(params.level)) ? text(params.level) : "";
   const filters = { vehicle: text(params.vehicle), hitched: text(params.hitched), level };
   const query = matrixQuerySchema.parse({ ...filters, page: 1, pageSize: 25, colPage: 1, colPageSize: 8 });
   const initial = await fleetMatrix(access, query);
