@@ -75,6 +75,20 @@ describe("the counter check, saved, shared and withdrawn", () => {
     expect(p95).toBeLessThan(16);
   });
 
+  it("shows a ball mount that leaves the trailer off level as a set-up to adjust, not a rating exceeded", async () => {
+    const { page } = staff;
+    await page.getByLabel("Gross trailer weight", { exact: true }).fill("6200");
+    const verdict = page.getByTestId("verdict-level").first();
+    await expect.poll(() => verdict.getAttribute("data-level")).toBe("within");
+    // Geometry: the demo pickup's receiver and the camper's coupler need a small drop; a 12 in drop is far off level
+    await page.getByLabel("Drop (negative for a rise)").fill("12");
+    await expect.poll(() => verdict.getAttribute("data-level")).toBe("adjust");
+    await expect.poll(() => page.getByTestId("check-ball-mount").first().getAttribute("data-status")).toBe("adjust");
+    await expect.poll(() => page.getByTestId("check-weakest-link").first().getAttribute("data-status")).not.toBe("over");
+    await page.getByTestId("verdict-meaning").first().filter({ hasText: "the set-up needs adjusting before you tow" }).waitFor();
+    await screenshot(page, "check-adjust-desktop");
+  });
+
   it("saves the check with the customer's name", async () => {
     const { page } = staff;
     await page.getByLabel("Gross trailer weight", { exact: true }).fill("6200");
@@ -90,6 +104,12 @@ describe("the counter check, saved, shared and withdrawn", () => {
     await page.getByRole("cell", { name: "Hollis Ambersmith" }).waitFor();
     await page.getByLabel("Customer").fill("ambersmith");
     await expect.poll(() => page.locator("tbody tr").count()).toBe(1);
+    // The saved-check filter tells a set-up to adjust apart from a rating exceeded.
+    await page.getByLabel("Verdict").selectOption({ label: "Adjust the set-up" });
+    await expect.poll(() => page.locator("tbody tr").count()).toBe(1);
+    await page.getByLabel("Verdict").selectOption({ label: "Over: do not tow" });
+    await expect.poll(() => page.locator("tbody tr").count()).toBe(0);
+    await page.getByLabel("Verdict").selectOption({ label: "Any" });
     await screenshot(page, "saved-checks-desktop");
   });
 
@@ -123,7 +143,13 @@ describe("the counter check, saved, shared and withdrawn", () => {
     expect(await page.getByRole("link", { name: /saved checks|team|overview/i }).count()).toBe(0);
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     expect(overflow).toBeLessThanOrEqual(0);
+    // The set-up to adjust reads as such, never as a rating exceeded.
+    await page.getByText("Adjust the set-up: no rating is exceeded, but the set-up needs adjusting before you tow.").waitFor();
+    await expect.poll(() => page.getByText(/a rating is exceeded — do not tow/).count()).toBe(0);
     await screenshot(page, "customer-link-phone");
+    await staff.page.goto(linkUrl);
+    await staff.page.getByText("Adjust the set-up: no rating is exceeded").waitFor();
+    await screenshot(staff.page, "customer-link-adjust-desktop");
   });
 
   it("withdrawn, the link shows a clear page with a 404 and no data", async () => {
@@ -148,7 +174,7 @@ describe("the quick check, signed out", () => {
       const before = await countSavedChecks();
       await page.goto("/quick-check");
       await page.getByLabel("Try an example").selectOption({ index: 1 });
-      await expect.poll(() => page.getByTestId("verdict-level").first().getAttribute("data-level")).toMatch(/within|tight|over/);
+      await expect.poll(() => page.getByTestId("verdict-level").first().getAttribute("data-level")).toMatch(/within|tight|adjust|over|incomplete/);
       expect(await page.getByRole("button", { name: "Save check" }).count()).toBe(0);
       await screenshot(page, "quick-check-phone");
       expect(await countSavedChecks()).toBe(before);
