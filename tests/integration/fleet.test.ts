@@ -331,7 +331,7 @@ describe("the pairing matrix at 500 × 200", () => {
       const response = await matrixRoute(new Request(url));
       const elapsed = performance.now() - started;
       type Cell = { level: string } | null;
-      return { elapsed, body: (await response.json()) as { totalRows: number; totalColumns: number; rows: Array<{ id: string; cells: Cell[] }>; columns: Array<{ id: string }>; counts: { within: number; tight: number; over: number } | null; evaluated: number } };
+      return { elapsed, body: (await response.json()) as { totalRows: number; totalColumns: number; rows: Array<{ id: string; cells: Cell[] }>; columns: Array<{ id: string }>; counts: { within: number; tight: number; adjust: number; over: number; incomplete: number } | null; evaluated: number } };
     };
     const page = await time("http://t/api/v1/fleet/matrix?pageSize=25&colPageSize=10");
     const filtered = await time("http://t/api/v1/fleet/matrix?level=over&pageSize=25&colPageSize=10");
@@ -344,7 +344,7 @@ describe("the pairing matrix at 500 × 200", () => {
     expect(page.body.rows).toHaveLength(25);
     expect(page.body.rows[0]!.cells).toHaveLength(10);
     const counts = filtered.body.counts!;
-    expect(counts.within + counts.tight + counts.over).toBe(100_000);
+    expect(counts.within + counts.tight + counts.adjust + counts.over + counts.incomplete).toBe(100_000);
     // The filtered page holds only "over" cells (the others blank), and some of them.
     expect(filtered.body.totalRows).toBeGreaterThan(0);
     for (const row of filtered.body.rows) expect(row.cells.every((cell) => cell === null || cell.level === "over")).toBe(true);
@@ -357,7 +357,8 @@ describe("the pairing matrix at 500 × 200", () => {
       if (cell) expect(cell.level).toBe(evaluatePair("imperial", part(first.id), part(filtered.body.columns[c]!.id), 0.1).level);
     });
     // The same counts again for the same filter, and the later page only holds trucks named "… 01…".
-    expect(cached.body.counts!.within + cached.body.counts!.tight + cached.body.counts!.over).toBe(10 * 200);
+    const c = cached.body.counts!;
+    expect(c.within + c.tight + c.adjust + c.over + c.incomplete).toBe(10 * 200);
     for (const row of cached.body.rows) expect(row.cells.every((cell) => cell === null || cell.level === "within")).toBe(true);
   });
 });
