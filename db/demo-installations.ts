@@ -59,11 +59,11 @@ export async function seedDemoInstallations(tx: Tx, shop: string, vehicleId: str
   await tx
     .update(vehicleProfiles)
     .set({
-      data: { ...data, vehicle: { ...data.vehicle, rearAxleToHitch: 38 }, hitch: { ...data.hitch, ...hitch, receiverHeight: 13.5, pinToFascia: 4.75 } },
+      data: { ...data, vehicle: { ...data.vehicle, rearAxleToPin: 38 }, hitch: { ...data.hitch, ...hitch, receiverHeight: 13.5, pinToFascia: 4.75 } },
       figureSources: {
         "hitch.pinToFascia": source("measured"),
         "hitch.receiverHeight": source("measured"),
-        "vehicle.rearAxleToHitch": source("measured"),
+        "vehicle.rearAxleToPin": source("measured"),
         "hitch.class": source("label"),
         "hitch.receiverSize": source("label"),
         "hitch.gtwRating": source("label"),

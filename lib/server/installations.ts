@@ -29,11 +29,11 @@ function assertCan(access: AccessContext, permission: Permission) {
 
 /**
  * Where each measurement and label figure of a record goes on the vehicle profile (rig paths). The core
- * takes the rear axle to the pin hole as `vehicle.rearAxleToHitch` for an accessory; the record keeps the
- * measurement under its own name.
+ * measures from the rear axle centre to the receiver pin hole (`vehicle.rearAxleToPin`) for every rig and
+ * reaches the ball through the ball mount's length.
  */
 export const PROFILE_PATHS = {
-  measurements: { pinToFascia: "hitch.pinToFascia", receiverHeight: "hitch.receiverHeight", rearAxleToPin: "vehicle.rearAxleToHitch" } satisfies Record<MeasurementKey, string>,
+  measurements: { pinToFascia: "hitch.pinToFascia", receiverHeight: "hitch.receiverHeight", rearAxleToPin: "vehicle.rearAxleToPin" } satisfies Record<MeasurementKey, string>,
   hitch: { class: "hitch.class", receiverSize: "hitch.receiverSize", gtwRating: "hitch.gtwRating", twRating: "hitch.twRating", gtwRatingWd: "hitch.gtwRatingWd", twRatingWd: "hitch.twRatingWd" },
 } as const;
 
@@ -315,7 +315,7 @@ function profileFigures(record: { units: UnitSystem; hitch: FittedHitch; measure
   const m = record.measurements;
   const rig = {
     units: record.units,
-    vehicle: m.rearAxleToPin ? { rearAxleToHitch: m.rearAxleToPin.value } : {},
+    vehicle: m.rearAxleToPin ? { rearAxleToPin: m.rearAxleToPin.value } : {},
     hitch: { ...record.hitch, ...(m.receiverHeight ? { receiverHeight: m.receiverHeight.value } : {}), ...(m.pinToFascia ? { pinToFascia: m.pinToFascia.value } : {}) },
   } as RigInput;
   return record.units === profileUnits ? rig : convertRig(rig, profileUnits);

@@ -118,7 +118,7 @@ function shapeFor(u: typeof imperial | typeof metric, units: "imperial" | "metri
     measurements: z.object({
       pinToFascia: measured(h.pinToFascia),
       receiverHeight: measured(h.receiverHeight),
-      rearAxleToPin: measured(v.rearAxleToHitch),
+      rearAxleToPin: measured(v.rearAxleToPin),
     }),
     checklist: z
       .array(

@@ -86,7 +86,7 @@ describe("an installation: fitted from a fleet vehicle, measured, ticked, handed
     await page.getByRole("link", { name: "open the vehicle" }).click();
     await page.getByTestId("source-hitch.receiverHeight").waitFor();
     await expect.poll(() => page.getByTestId("source-hitch.receiverHeight").innerText()).toMatch(/^Measured \d{4}-\d{2}-\d{2}/);
-    const row = await one("SELECT json_extract(data, '$.hitch.receiverHeight') AS h, json_extract(data, '$.vehicle.rearAxleToHitch') AS x FROM vehicle_profiles WHERE name = 'Stellmark Wendle SUV'");
+    const row = await one("SELECT json_extract(data, '$.hitch.receiverHeight') AS h, json_extract(data, '$.vehicle.rearAxleToPin') AS x FROM vehicle_profiles WHERE name = 'Stellmark Wendle SUV'");
     expect(Number(row!.h)).toBe(17.5);
     expect(Number(row!.x)).toBe(44);
     await screenshot(page, "install-vehicle-sources-desktop");

@@ -41,7 +41,7 @@ async function seedProfiles() {
     organisationId: ORG_A,
     name: "Dunmore Wayfarer (blue)",
     units: "imperial",
-    data: { units: "imperial", vehicle: { towRating: 3500, towRatingWd: 3500, tongueWeightLimit: 350, departureAngle: 18, wheelbase: 106, rearAxleToHitch: 40 }, hitch: { receiverHeight: 20, pinToFascia: 3 } },
+    data: { units: "imperial", vehicle: { towRating: 3500, towRatingWd: 3500, tongueWeightLimit: 350, departureAngle: 18, wheelbase: 106, rearAxleToPin: 40 }, hitch: { receiverHeight: 20, pinToFascia: 3 } },
   });
   await db.insert(accessoryProfiles).values({
     id: RACK,
@@ -103,11 +103,11 @@ describe("an installation record", () => {
     const profile = (await db.select().from(vehicleProfiles).where(eq(vehicleProfiles.id, VEHICLE)).get())!;
     const data = profile.data as { vehicle: Record<string, number>; hitch: Record<string, unknown> };
     expect(data.hitch).toMatchObject({ class: 2, receiverSize: "2", gtwRating: 3500, twRating: 300, receiverHeight: 16, pinToFascia: 5.5 });
-    expect(data.vehicle.rearAxleToHitch).toBe(24);
+    expect(data.vehicle.rearAxleToPin).toBe(24);
     expect(data.vehicle.towRating).toBe(3500);
     const sources = profile.figureSources as FigureSources;
     expect(sources["hitch.receiverHeight"]).toMatchObject({ recordId, fittedOn: "2026-11-30", kind: "measured", measuredBy: "staffA" });
-    expect(sources["vehicle.rearAxleToHitch"]).toMatchObject({ recordId, kind: "measured" });
+    expect(sources["vehicle.rearAxleToPin"]).toMatchObject({ recordId, kind: "measured" });
     expect(sources["hitch.gtwRating"]).toMatchObject({ recordId, kind: "label" });
     const stored = (await db.select().from(installationRecords).where(eq(installationRecords.id, recordId)).get())!;
     expect(stored.checklist).toEqual([

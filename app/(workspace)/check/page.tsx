@@ -26,7 +26,7 @@ export default async function CheckPage({ searchParams }: { searchParams: Promis
   const profiles = await listProfilesForCheck(access);
   const vehicleId = paired ? pick(params.vehicle) : undefined;
   const sources = vehicleId ? Object.entries(await figureSourcesOf(access, vehicleId)).filter(([, source]) => source.kind === "measured") : [];
-  const MEASURED_WORDS: Record<string, string> = { "hitch.receiverHeight": "receiver height", "hitch.pinToFascia": "pin hole to fascia", "vehicle.rearAxleToHitch": "rear axle to pin hole" };
+  const MEASURED_WORDS: Record<string, string> = { "hitch.receiverHeight": "receiver height", "hitch.pinToFascia": "pin hole to fascia", "vehicle.rearAxleToPin": "rear axle to pin hole" };
   return (
     <div className="flex flex-col gap-6">
       <PageHeader
