@@ -34,7 +34,7 @@ describe("SideView", () => {
     render(<SideView rig={trailerRig} kind="trailer" />);
     screen.getByRole("img", {
       name: /hitch and trailer coupler, to scale/,
-      description: /Receiver 20\.0 in above the ground, pin hole 5\.0 in behind the fascia, rear axle to ball 48\.0 in, ball mount 8\.0 in long, drop 4\.0 in, coupler 16\.5 in high/,
+      description: /Receiver 20\.0 in above the ground, pin hole 5\.0 in behind the fascia, rear axle to pin hole 40\.0 in, ball mount 8\.0 in long, drop 4\.0 in, coupler 16\.5 in high/,
     });
     for (const label of ["receiver height 20.0 in", "pin hole to fascia 5.0 in", "rear axle to pin hole 40.0 in", "ball mount 8.0 in", "drop 4.0 in", "coupler 16.5 in"])
       expect(screen.getByText(dim(label))).toBeTruthy();
