@@ -59,7 +59,7 @@ describe("signing up", () => {
     await page.getByRole("button", { name: "Finish signing up" }).click();
     await page.waitForURL(/\/overview/);
     await page.getByRole("heading", { level: 1, name: "Hello, Odile Fenwright" }).waitFor();
-    expect(await navLabels(page)).toEqual(["Overview", "Check a rig", "Saved checks", "Fleet", "Training", "Team", "Organisation", "Mailbox"]);
+    expect(await navLabels(page)).toEqual(["Overview", "Check a rig", "Saved checks", "Fleet", "Installations", "Training", "Team", "Organisation", "Mailbox"]);
   });
 
   it("answers the same for an address that already has an account", async () => {
@@ -79,10 +79,10 @@ describe("signing up", () => {
 
 describe("signing in with each role", () => {
   const cases = [
-    { who: "owner", email: DEMO.owner, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training", "Team", "Organisation", "Mailbox"], role: "Owner", start: "The team and this month" },
-    { who: "counter staff", email: DEMO.staff, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training"], role: "Counter staff", start: "Recent checks" },
-    { who: "trainer", email: DEMO.trainer, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training"], role: "Trainer", start: "Courses and learners" },
-    { who: "fleet manager", email: DEMO.fleetManager, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Training"], role: "Fleet manager", start: "The fleet's pairings" },
+    { who: "owner", email: DEMO.owner, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Installations", "Training", "Team", "Organisation", "Mailbox"], role: "Owner", start: "The team and this month" },
+    { who: "counter staff", email: DEMO.staff, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Installations", "Training"], role: "Counter staff", start: "Recent checks" },
+    { who: "trainer", email: DEMO.trainer, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Installations", "Training"], role: "Trainer", start: "Courses and learners" },
+    { who: "fleet manager", email: DEMO.fleetManager, nav: ["Overview", "Check a rig", "Saved checks", "Fleet", "Installations", "Training"], role: "Fleet manager", start: "The fleet's pairings" },
   ];
 
   for (const { who, email, nav, role, start } of cases) {
@@ -223,7 +223,7 @@ describe("inviting a member", () => {
       await screenshot(invitee.page, "invitation-phone");
       await invitee.page.getByRole("button", { name: "Join" }).click();
       await invitee.page.waitForURL(/\/overview/);
-      expect(await navLabels(invitee.page)).toEqual(["Overview", "Check a rig", "Saved checks", "Fleet", "Training"]);
+      expect(await navLabels(invitee.page)).toEqual(["Overview", "Check a rig", "Saved checks", "Fleet", "Installations", "Training"]);
       await invitee.page.getByText("You have joined Quillfield Hitch & Trailer.").waitFor();
 
       // The link works once.

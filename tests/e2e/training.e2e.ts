@@ -30,7 +30,7 @@ describe("training: author, publish, practise, see the result", () => {
     await page.getByRole("button", { name: "Copy into our lessons: “A ball mount that rides level”" }).click();
     await page.waitForURL(/\/training\/lessons\/[A-Za-z0-9_-]+$/);
     lessonPath = new URL(page.url()).pathname;
-    await expect.poll(() => page.getByTestId("lesson-status").getAttribute("data-status")).toBe("over");
+    await expect.poll(() => page.getByTestId("lesson-status").getAttribute("data-status")).toBe("adjust");
     await page.getByLabel("Visibility").selectOption("public");
     await page.getByRole("button", { name: "Set who sees it" }).click();
     const link = page.getByTestId("public-link");
