@@ -7,7 +7,7 @@ import { formatMargin, formatQuantity } from "@/lib/format";
 import type { AccessoryFitResult, AnyCheckResult, CheckId, Link, TongueShareResult, WeakestLinkResult } from "@/lib/towing/types";
 import { VerdictBadge, verdictWords } from "@/components/ui/verdict-badge";
 import { cn } from "@/components/ui/cn";
-import { CHECK_WORDS } from "./glossary";
+import { CHECK_WORDS } from "@/lib/glossary";
 import { bandEdge } from "./tongue-share-chart";
 
 /** What the measured side of each check is, in words. */

@@ -10,7 +10,7 @@ import { buttonClasses } from "@/components/ui/button";
 import { cn } from "@/components/ui/cn";
 import { VerdictBadge, levelWords } from "@/components/ui/verdict-badge";
 import { CheckItem, printedLines } from "./check-item";
-import { plainTitle } from "./glossary";
+import { plainTitle } from "@/lib/glossary";
 import { PrintButton } from "./print-button";
 import { reportFigures } from "./report-charts";
 import { describeRig, listWords } from "./rig-summary";

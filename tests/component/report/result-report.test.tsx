@@ -7,7 +7,7 @@ import { evaluateRig, parseRig, type RigInput, type RigResult } from "@/lib/towi
 import { ResultReport, type ResultReportProps } from "@/components/report/result-report";
 import { ReportGone } from "@/components/report/report-gone";
 import { describeRig } from "@/components/report/rig-summary";
-import { CHECK_WORDS } from "@/components/report/glossary";
+import { CHECK_WORDS } from "@/lib/glossary";
 import { zeroScale } from "@/components/report/chart-scale";
 import { formatMargin, formatQuantity } from "@/lib/format";
 
