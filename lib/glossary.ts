@@ -129,7 +129,7 @@ export const TERMS = [
     term: "Hitch class",
     names: ["hitch class", "class"],
     definition:
-      "A ceiling by trailer weight (SAE J684: Class 1 up to 2,000 lb, 2 up to 3,500, 3 up to 5,000, 4 up to 10,000); the hitch's label gives its own rating, which may be lower. \"Class 5\" is trade usage, not in the standard.",
+      "A ceiling on what a hitch of that class may be rated for, set by SAE J684 from Class 1 (lightest) to Class 4; the hitch's own label gives its rating, which may be lower. \"Class 5\" is trade usage, not in the standard.",
   },
   {
     id: "receiver",
@@ -283,7 +283,7 @@ export const TERMS = [
 
 export type TermId = (typeof TERMS)[number]["id"];
 
-export const TERM_BY_ID: Record<TermId, GlossaryTerm> = Object.fromEntries(TERMS.map((t) => [t.id, t])) as Record<TermId, GlossaryTerm>;
+export const TERM_BY_ID: Record<TermId, GlossaryTerm> = Object.fromEntries(TERMS.map((t) => [t.id, t])) as unknown as Record<TermId, GlossaryTerm>;
 
 export interface SymbolEntry {
   /** What the symbol stands for, in one plain phrase. */
@@ -498,18 +498,18 @@ export function plainTitle(id: CheckId): string {
 export const STATUS_MEANING: Record<"over" | "adjust" | "tight" | "within" | "incomplete", { word: string; verdict: string; check: string }> = {
   over: {
     word: "Rating exceeded",
-    verdict: "At least one rating is exceeded: do not tow like this until the load or the vehicle changes.",
-    check: "A rating is exceeded here: this needs a lighter load or another vehicle or part before you tow.",
+    verdict: "A rating is exceeded: do not tow like this. It needs a lighter load, or another vehicle or part.",
+    check: "A rating is exceeded here: do not tow like this; it needs a lighter load, or another vehicle or part.",
   },
   adjust: {
     word: "Set-up to adjust",
-    verdict: "No rating is exceeded, but part of the set-up needs adjusting before you tow; the shop will tell you what.",
-    check: "Nothing here is over a rating, but the set-up needs adjusting (for example another ball mount, or the bars re-set).",
+    verdict: "No rating is exceeded, but the set-up needs adjusting before you tow. See what to do under each check.",
+    check: "Nothing here is over a rating, but the set-up needs adjusting before you tow.",
   },
   tight: {
     word: "Tight",
-    verdict: "It fits, with little room left on at least one rating: weigh the loaded rig before you rely on it.",
-    check: "It fits, with little room left: weigh it loaded before each trip.",
+    verdict: "It fits, with little room left on at least one rating. Weigh the loaded rig before you rely on it.",
+    check: "It fits, with little room left: weigh it loaded before you rely on it.",
   },
   within: {
     word: "Within",
@@ -517,8 +517,8 @@ export const STATUS_MEANING: Record<"over" | "adjust" | "tight" | "within" | "in
     check: "Room to spare.",
   },
   incomplete: {
-    word: "Not enough figures",
-    verdict: "Not confirmed yet: some figures are missing, so the rig cannot be called within.",
+    word: "Not confirmed yet",
+    verdict: "Some figures are still missing, so the rig cannot be called within until they are in.",
     check: "Some figures are missing, so this could not be checked yet.",
   },
 };

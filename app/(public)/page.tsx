@@ -12,7 +12,7 @@ export default function LandingPage() {
     <div className="mx-auto max-w-5xl px-4 py-12 sm:px-6 sm:py-20">
       <p className="text-sm font-semibold tracking-wide text-accent uppercase">For hitch shops, fleets and trainers</p>
       <h1 className="mt-3 max-w-3xl text-4xl leading-[1.1] font-semibold tracking-tight text-balance text-ink sm:text-5xl">
-        Will this load be safe and legal on this vehicle and this hitch?
+        Does this load fit every rating of this vehicle and this hitch?
       </h1>
       <p className="mt-5 max-w-2xl text-lg leading-relaxed text-ink-soft">
         Towmargin adds up the owner&rsquo;s manual, the door-jamb label and the hitch label the way they should be added: the lowest rating governs,

@@ -37,6 +37,9 @@ import {
   type HitchedKind,
   type RigFormValues,
 } from "./rig-form";
+import { GlossaryDisclosure } from "@/components/glossary/glossary-disclosure";
+import { GlossaryList } from "@/components/glossary/glossary-list";
+import { SYMBOLS, TERMS } from "@/lib/glossary";
 import { SAMPLE_RIGS } from "./sample-rigs";
 import { SideView } from "./side-view";
 import { VerdictPanel } from "./verdict-panel";
@@ -526,6 +529,9 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
 
             {onSave ? <SaveCheck onSave={saveWithErrors} getRig={currentRig} /> : null}
           </div>
+          <GlossaryDisclosure title="Words and symbols used here">
+            <GlossaryList terms={TERMS} symbols={Object.keys(SYMBOLS)} />
+          </GlossaryDisclosure>
         </div>
       </FormProvider>
     </UnitsProvider>

@@ -6,6 +6,7 @@ import type { ReactNode } from "react";
 import { TBody, TD, TH, THead, TR } from "@/components/ui";
 import { formatNumber, formatQuantity } from "@/lib/format";
 import type { Step, StepInput, UnitString } from "@/lib/towing";
+import { SymbolLink } from "@/components/glossary/glossary-list";
 
 /** A step figure: with its unit when it has one; a bare factor or share keeps three decimals. */
 export function formatStepValue(value: number, unit: UnitString): string {
@@ -30,11 +31,22 @@ export function WorkedSteps({ steps }: { steps: Step[] }) {
           </p>
           {step.inputs.length ? (
             <div className="mt-2">
-              <StepFiguresTable inputs={step.inputs} renderSymbol={(symbol) => <span className="font-mono">{symbol}</span>} />
+              <StepFiguresTable
+                inputs={step.inputs}
+                renderSymbol={(symbol) => (
+                  <SymbolLink symbol={symbol}>
+                    <span className="font-mono">{symbol}</span>
+                  </SymbolLink>
+                )}
+              />
             </div>
           ) : null}
           <p className="mt-1.5 text-sm text-ink">
-            Result: <span className="font-mono">{step.result.symbol}</span> ={" "}
+            Result:{" "}
+            <SymbolLink symbol={step.result.symbol}>
+              <span className="font-mono">{step.result.symbol}</span>
+            </SymbolLink>{" "}
+            ={" "}
             <strong className="num font-semibold">{formatStepValue(step.result.value, step.result.unit)}</strong>
           </p>
           {step.note ? <p className="mt-1 text-[0.8125rem] leading-snug text-ink-soft">{step.note}</p> : null}

@@ -8,13 +8,14 @@ import type { AccessoryFitResult, AnyCheckResult, CheckId, Link, TongueShareResu
 import { VerdictBadge, verdictWords } from "@/components/ui/verdict-badge";
 import { cn } from "@/components/ui/cn";
 import { CHECK_WORDS } from "@/lib/glossary";
+import { checkMeaning } from "./meaning";
 import { bandEdge } from "./tongue-share-chart";
 
 /** What the measured side of each check is, in words. */
 const ACTUAL_LABEL: Partial<Record<CheckId, string>> = {
-  payload: "Loaded vehicle",
+  payload: "Payload used",
   "combined-weight": "Vehicle and trailer",
-  "axle-loads": "Busiest axle",
+  "axle-loads": "Axle with least room",
   "weight-distribution": "This rig",
   "ball-mount": "Off level by",
   "tongue-measure": "Tongue weight",
@@ -205,6 +206,11 @@ export function CheckItem({ check, columnBreak = false }: { check: AnyCheckResul
       </div>
       {words.line ? <p className="mt-0.5 text-sm leading-snug text-ink-soft print:hidden">{words.line}</p> : null}
       <p className="mt-2 text-[0.9375rem] leading-snug print:mt-0 print:text-[8pt] print:leading-[1.3]">{check.message}</p>
+      {problem ? (
+        <p data-testid="finding-meaning" className="mt-1 text-sm leading-snug font-medium print:mt-0 print:text-[7.5pt]">
+          {checkMeaning(check)}
+        </p>
+      ) : null}
       <Figures check={check} />
       {isWeakestLink(check) ? <LinkList check={check} /> : null}
       {isAccessoryFit(check) ? <PartList check={check} /> : null}

@@ -65,7 +65,7 @@ function ratingsFigure(result: RigResult): ChartFigure | null {
     }
     return {
       id: "ratings",
-      caption: "Bars: the load as entered. Dark lines: each part's rating; the bar must stop short of every line, and the heaviest line, the lowest rating, decides.",
+      caption: "Bars: the load as entered. Dark lines: each part's rating; the bar must stop short of every line, and the thickest line, the lowest rating, decides.",
       chart: <BarRowsChart title="Ratings against the load, one row per part" groups={groups} governingNote={GOVERNING_WORDS} />,
     };
   }

@@ -10,7 +10,9 @@ import { buttonClasses } from "@/components/ui/button";
 import { cn } from "@/components/ui/cn";
 import { VerdictBadge, levelWords } from "@/components/ui/verdict-badge";
 import { CheckItem, printedLines } from "./check-item";
-import { plainTitle } from "@/lib/glossary";
+import { CHECK_WORDS, plainTitle, STATUS_MEANING, termsIn } from "@/lib/glossary";
+import { GlossaryList } from "@/components/glossary/glossary-list";
+import { verdictMeaningKey } from "./meaning";
 import { PrintButton } from "./print-button";
 import { reportFigures } from "./report-charts";
 import { describeRig, listWords } from "./rig-summary";
@@ -42,7 +44,7 @@ const FALLBACK_CAUTIONS = [
   "The lowest rating of any part is the limit for the whole rig.",
   "Weigh the loaded rig at a public scale before you rely on these figures.",
   "Fit every part as its maker instructs, to the maker's torque values.",
-  "Local law and a licensed installer have the last word.",
+  "Towmargin does the arithmetic on the figures entered and does not decide what the law allows: local law and a qualified installer have the last word.",
 ];
 
 const SEVERITY: Record<CheckStatus, number> = { over: 0, adjust: 1, tight: 2, incomplete: 3, within: 4 };
@@ -58,17 +60,13 @@ function verdictSentence(verdict: VerdictResult): string {
   return text.charAt(0).toUpperCase() + text.slice(1);
 }
 
-/** One plain line on what the level means: a rating exceeded and a set-up to adjust never share words. */
+/** One plain line on what the level means, in the customer's words for each status (one source: lib/glossary). */
 function levelMeaning(verdict: VerdictResult): string {
+  const key = verdictMeaningKey(verdict);
   const share = formatRatio(verdict.tightMarginRatio, 0);
-  if (verdict.level === "over") return "Over: a rating is exceeded — do not tow like this.";
-  if (verdict.level === "adjust") return "Adjust the set-up: no rating is exceeded, but the set-up needs adjusting before you tow.";
-  // A result saved before "not confirmed" had its own level read "tight" with data missing.
-  if (verdict.level === "incomplete" || (!verdict.complete && verdict.levelFromCheckedOnly === "within")) {
-    return "Not confirmed yet: the rig cannot be called within until every figure is in.";
-  }
-  if (verdict.level === "tight") return `Tight: it fits, with less than ${share} left on at least one rating.`;
-  return `Within: every rating has room to spare, at least ${share} on each.`;
+  if (key === "tight") return `Tight: it fits, with less than ${share} left on at least one rating; weigh the loaded rig before you rely on it.`;
+  if (key === "within") return `Within: every rating checked has room to spare, at least ${share} on each.`;
+  return `${STATUS_MEANING[key].word}. ${STATUS_MEANING[key].verdict}`;
 }
 
 const TONE_PANEL: Record<VerdictResult["level"], string> = {
@@ -102,6 +100,19 @@ function sortChecks(checks: AnyCheckResult[]): AnyCheckResult[] {
     .map((check, index) => ({ check, index }))
     .sort((a, b) => SEVERITY[a.check.status] - SEVERITY[b.check.status] || a.index - b.index)
     .map(({ check }) => check);
+}
+
+/** Every sentence and label the page shows, to find the terms it should define. */
+function reportTexts(rig: RigInput, result: RigResult): string[] {
+  const texts = [describeRig(rig), result.verdict.message];
+  for (const check of result.checks) {
+    const words = CHECK_WORDS[check.id];
+    texts.push(check.message, ...check.advice, ...check.cautions, check.governing?.label ?? "");
+    if (words) texts.push(words.title, words.line);
+    if ("links" in check) for (const link of check.links) texts.push(link.label);
+    if ("parts" in check) for (const part of check.parts) texts.push(part.label);
+  }
+  return texts;
 }
 
 const H2 = "text-sm font-semibold tracking-wide text-ink-soft uppercase print:text-[8pt]";
@@ -237,6 +248,13 @@ export function ResultReport({ shopName, createdAt, customerName, rig, result, q
           ) : null}
         </section>
       </div>
+
+      <section aria-labelledby="report-words" className="mt-6 print:hidden">
+        <h2 id="report-words" className={H2}>
+          Words on this page
+        </h2>
+        <GlossaryList className="mt-2" terms={termsIn(reportTexts(rig, result))} />
+      </section>
 
       <footer className="mt-8 border-t border-rule pt-3 text-xs text-ink-faint print:mt-1.5 print:pt-0.5 print:text-[7pt]">
         <p>

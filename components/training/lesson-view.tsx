@@ -4,6 +4,8 @@
  */
 import type { ReactNode } from "react";
 import { Card, CardBody } from "@/components/ui";
+import { GlossaryList } from "@/components/glossary/glossary-list";
+import { termsIn } from "@/lib/glossary";
 import { familyLabel } from "@/lib/training/library";
 import type { PreparedLesson } from "@/lib/training/prepare";
 import { LessonConclusion } from "./lesson-conclusion";
@@ -35,6 +37,21 @@ export function LessonRule({ rule }: { rule: string }) {
   );
 }
 
+/** The glossary's definitions of the words and symbols this lesson uses, so a new hire can read it alone. */
+export function LessonWords({ lesson }: { lesson: PreparedLesson }) {
+  const texts = [lesson.story, lesson.question, lesson.rule, lesson.conclusion.message, ...lesson.conclusion.advice];
+  for (const step of lesson.steps) texts.push(step.title, step.formulaWords, ...step.inputs.map((input) => input.label), step.note ?? "");
+  const symbols = lesson.steps.flatMap((step) => [...step.inputs.map((input) => input.symbol), step.result.symbol]);
+  return (
+    <section aria-labelledby="lesson-words">
+      <h2 id="lesson-words" className="mb-3 text-base font-semibold text-ink">
+        Words and symbols in this lesson
+      </h2>
+      <GlossaryList terms={termsIn(texts)} symbols={symbols} />
+    </section>
+  );
+}
+
 export function LessonView({ lesson, aside }: { lesson: PreparedLesson; aside?: ReactNode }) {
   return (
     <article className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]" aria-labelledby="lesson-title">
@@ -56,6 +73,11 @@ export function LessonView({ lesson, aside }: { lesson: PreparedLesson; aside?: 
                 </li>
               ))}
             </ol>
+          </CardBody>
+        </Card>
+        <Card>
+          <CardBody>
+            <LessonWords lesson={lesson} />
           </CardBody>
         </Card>
       </div>

@@ -4,6 +4,7 @@
  */
 import { StepFiguresTable, formatStepValue } from "@/components/check/worked-steps";
 import type { PreparedStep } from "@/lib/training/prepare";
+import { SymbolLink } from "@/components/glossary/glossary-list";
 import { FormulaView } from "./formula-view";
 
 export function StepInputs({ step }: { step: PreparedStep }) {
@@ -12,7 +13,11 @@ export function StepInputs({ step }: { step: PreparedStep }) {
     <StepFiguresTable
       inputs={step.inputs}
       caption={`Figures for ${step.title.toLowerCase()}`}
-      renderSymbol={(symbol) => <FormulaView parts={[{ kind: "symbol", ...splitSymbol(step, symbol) }]} />}
+      renderSymbol={(symbol) => (
+        <SymbolLink symbol={symbol}>
+          <FormulaView parts={[{ kind: "symbol", ...splitSymbol(step, symbol) }]} />
+        </SymbolLink>
+      )}
     />
   );
 }
@@ -43,7 +48,11 @@ export function StepFormula({ step }: { step: PreparedStep }) {
 export function StepResult({ step }: { step: PreparedStep }) {
   return (
     <p className="text-sm text-ink">
-      Result: <FormulaView parts={[step.resultPart]} /> ={" "}
+      Result:{" "}
+      <SymbolLink symbol={step.result.symbol}>
+        <FormulaView parts={[step.resultPart]} />
+      </SymbolLink>{" "}
+      ={" "}
       <strong className="num font-semibold" data-testid="step-result">
         {formatStepValue(step.result.value, step.result.unit)}
       </strong>

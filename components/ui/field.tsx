@@ -92,9 +92,9 @@ export function Field({ label, help, error, required = false, id, hideLabel = fa
         ) : null}
       </div>
       {hasHelp ? (
-        <p id={helpId} className="text-[0.8125rem] leading-snug text-ink-soft">
+        <div id={helpId} className="text-[0.8125rem] leading-snug text-ink-soft">
           {help}
-        </p>
+        </div>
       ) : null}
       {rendered}
       {hasError ? (

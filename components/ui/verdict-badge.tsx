@@ -1,6 +1,7 @@
 import type { HTMLAttributes } from "react";
 import { CircleCheck, OctagonX, SquareDashed, TriangleAlert, Wrench, type LucideIcon } from "lucide-react";
 import { cn } from "./cn";
+import { STATUS_MEANING } from "@/lib/glossary";
 
 export type VerdictStatus = "within" | "tight" | "adjust" | "over" | "incomplete";
 export type VerdictBadgeSize = "sm" | "md" | "lg";
@@ -23,13 +24,13 @@ export const levelWords: Record<VerdictStatus, string> = {
   incomplete: "Not confirmed",
 };
 
-/** What each level means, in a sentence anyone can read. */
+/** What each level means, in a sentence anyone can read: the glossary's words, one source for every screen. */
 export const levelMeaning: Record<VerdictStatus, string> = {
-  within: "Every rating has room to spare.",
-  tight: "It fits, with little room left on at least one rating.",
-  adjust: "No rating is exceeded, but the set-up needs adjusting before you tow.",
-  over: "A rating is exceeded: do not tow like this.",
-  incomplete: "Not confirmed yet: some figures are still missing.",
+  within: STATUS_MEANING.within.verdict,
+  tight: STATUS_MEANING.tight.verdict,
+  adjust: STATUS_MEANING.adjust.verdict,
+  over: STATUS_MEANING.over.verdict,
+  incomplete: STATUS_MEANING.incomplete.verdict,
 };
 
 // Each status has its own outline (round, three-sided, a spanner, eight-sided, broken) so a greyscale printout

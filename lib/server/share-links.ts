@@ -108,7 +108,7 @@ export async function emailShareLink(access: AccessContext, checkId: string, tok
     paragraphs: [
       check?.customerName ? `Hello ${check.customerName}.` : "Hello.",
       `${access.organisation.name} checked your vehicle, hitch and load with Towmargin. The link shows the result, every rating it was checked against, and what to watch for.`,
-      "Ratings come from the vehicle maker and the labels; the lowest one governs. Weigh the loaded rig, follow each maker's instructions and torque values; local law and a licensed installer have the last word.",
+      "Ratings come from the vehicle maker and the labels; the lowest one governs. Weigh the loaded rig, follow each maker's instructions and torque values; Towmargin does the arithmetic and does not decide what the law allows: local law and a qualified installer have the last word.",
     ],
     actionLabel: "See the result",
     actionUrl: url,

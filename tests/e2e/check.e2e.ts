@@ -149,8 +149,8 @@ describe("the counter check, saved, shared and withdrawn", () => {
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     expect(overflow).toBeLessThanOrEqual(0);
     // The set-up to adjust reads as such, never as a rating exceeded.
-    await page.getByText("Adjust the set-up: no rating is exceeded, but the set-up needs adjusting before you tow.").waitFor();
-    await expect.poll(() => page.getByText(/a rating is exceeded — do not tow/).count()).toBe(0);
+    await page.getByText("Set-up to adjust. No rating is exceeded, but the set-up needs adjusting before you tow. See what to do under each check.").waitFor();
+    await expect.poll(() => page.getByText(/Rating exceeded\. A rating is exceeded/).count()).toBe(0);
     await screenshot(page, "customer-link-phone");
     await staff.page.goto(linkUrl);
     await staff.page.getByText("Adjust the set-up: no rating is exceeded").waitFor();

@@ -61,7 +61,7 @@ describe("training: author, publish, practise, see the result", () => {
     await page.getByRole("heading", { name: "A ball mount that rides level" }).waitFor();
     expect(await page.locator('meta[name="robots"]').getAttribute("content")).toMatch(/noindex/);
     await page.getByText("Drop needed to ride level").first().waitFor();
-    await page.getByText(/installer have the last word/).first().waitFor();
+    await page.getByText(/a qualified installer have the last word/).first().waitFor();
     expect(await page.locator("body").innerText()).not.toContain("Quillfield");
     await screenshot(page, "training-public-phone");
   });

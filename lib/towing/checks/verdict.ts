@@ -23,7 +23,7 @@ export const GENERAL_CAUTIONS = [
   "The lowest rating of any part is the limit for the whole rig.",
   "Weigh the loaded rig at a public scale: estimates and brochure figures are not weights.",
   "Follow each maker's fitting instructions and torque values.",
-  "Local law and a licensed installer have the last word.",
+  "Towmargin does the arithmetic on the figures entered and does not decide what the law allows: local law and a qualified installer have the last word.",
 ];
 
 /**

@@ -145,7 +145,7 @@ describe("VerdictPanel with a set-up to adjust", () => {
     const level = screen.getByTestId("verdict-level");
     expect(level.getAttribute("data-level")).toBe("adjust");
     expect(level.textContent).toBe("Adjust the set-up");
-    expect(screen.getByTestId("verdict-meaning").textContent).toBe("No rating is exceeded, but the set-up needs adjusting before you tow.");
+    expect(screen.getByTestId("verdict-meaning").textContent).toBe("No rating is exceeded, but the set-up needs adjusting before you tow. See what to do under each check.");
     const row = screen.getByTestId("check-ball-mount");
     expect(row.getAttribute("data-status")).toBe("adjust");
     expect(within(row).getByText("Adjust before you tow")).toBeTruthy();

@@ -97,7 +97,7 @@ describe("ResultReport header and verdict", () => {
     expect(verdict.querySelector('[data-status="tight"]')?.textContent).toBe("Tight");
     // The badge already says "Tight"; the sentence carries the rest of the message.
     expect(within(verdict).getByText("Loaded and hitched, the vehicle weighs 6,450 lb of its 7,000 lb GVWR, leaving 550 lb.")).toBeTruthy();
-    expect(within(verdict).getByText("Tight: it fits, with less than 10 % left on at least one rating.")).toBeTruthy();
+    expect(within(verdict).getByText("Tight: it fits, with less than 10 % left on at least one rating; weigh the loaded rig before you rely on it.")).toBeTruthy();
   });
 
   it("explains the level the core gave, with the core's own sentence", () => {
@@ -120,7 +120,7 @@ describe("ResultReport header and verdict", () => {
     render(<ResultReport shopName="Quillfeather Hitch Works" createdAt={SAVED} rig={rig} result={roomy} />);
     const verdict = screen.getByRole("region", { name: "Verdict" });
     expect(within(verdict).getByText("Every check passes with at least 10 % to spare.")).toBeTruthy();
-    expect(within(verdict).getByText("Within: every rating has room to spare, at least 10 % on each.")).toBeTruthy();
+    expect(within(verdict).getByText("Within: every rating checked has room to spare, at least 10 % on each.")).toBeTruthy();
   });
 
   it("says a rig is over and must not be towed like this", () => {
@@ -128,7 +128,9 @@ describe("ResultReport header and verdict", () => {
     expect(result.verdict.level).toBe("over");
     const verdict = screen.getByRole("region", { name: "Verdict" });
     expect(verdict.querySelector('[data-status="over"]')?.textContent).toBe("Over: do not tow");
-    expect(within(verdict).getByText("Over: a rating is exceeded — do not tow like this.")).toBeTruthy();
+    expect(
+      within(verdict).getByText("Rating exceeded. A rating is exceeded: do not tow like this. It needs a lighter load, or another vehicle or part."),
+    ).toBeTruthy();
   });
 
   it("says a set-up to adjust apart from a rating exceeded", () => {
@@ -138,10 +140,13 @@ describe("ResultReport header and verdict", () => {
     expect(result.verdict.level).toBe("adjust");
     const verdict = screen.getByRole("region", { name: "Verdict" });
     expect(verdict.querySelector('[data-status="adjust"]')?.textContent).toBe("Adjust the set-up");
-    expect(within(verdict).getByText("Adjust the set-up: no rating is exceeded, but the set-up needs adjusting before you tow.")).toBeTruthy();
-    expect(verdict.textContent).not.toMatch(/rating is exceeded —|do not tow like this/);
+    expect(
+      within(verdict).getByText("Set-up to adjust. No rating is exceeded, but the set-up needs adjusting before you tow. See what to do under each check."),
+    ).toBeTruthy();
+    expect(verdict.textContent).not.toMatch(/Rating exceeded|do not tow like this/);
     const item = checkItem(CHECK_WORDS["accessory-fit"].title);
     expect(within(item).getByRole("heading", { level: 4, name: /^Adjust before you tow/ })).toBeTruthy();
+    expect(within(item).getByTestId("finding-meaning").textContent).toMatch(/needs a different set-up before you drive/);
   });
 
   it("says an over rig also needs its set-up adjusted", () => {
@@ -149,6 +154,36 @@ describe("ResultReport header and verdict", () => {
     expect(result.verdict.level).toBe("over");
     expect(result.verdict.adjust).toContain("ball-mount");
     expect(screen.getByRole("region", { name: "Verdict" }).textContent).toMatch(/The set-up also needs adjusting before you tow: .*ball/);
+  });
+
+  it("calls a rig whose only problem is its set-up a set-up to adjust, never a rating exceeded", () => {
+    // A 6 in drop mount where a 3 in drop levels the trailer: 3 in off level, beyond the 1 in allowance
+    // (common practice, no published source); every rating still has room.
+    const { result } = renderReport(variant("camper-on-pickup", { "ballMount.drop": 6 }));
+    expect(result.checks.filter((c) => c.status === "over")).toEqual([]);
+    expect(result.checks.filter((c) => c.status === "adjust").map((c) => c.id)).toEqual(["ball-mount"]);
+    const verdict = screen.getByRole("region", { name: "Verdict" });
+    expect(verdict.textContent).not.toMatch(/Rating exceeded|A rating is exceeded/);
+    expect(verdict.textContent).toContain("Set-up to adjust. No rating is exceeded");
+    const item = checkItem(CHECK_WORDS["ball-mount"].title);
+    expect(within(item).getByTestId("finding-meaning").textContent).toMatch(/ball mount with another rise or drop/);
+  });
+
+  it("says what a share outside its band means for the customer, without calling it a rating", () => {
+    // 500 lb on a 6,200 lb trailer is 8.1 %, under the 10–15 % band (Source: GM and Nissan owner's manuals)
+    const { result } = renderReport(variant("camper-on-pickup", { "trailer.tongueWeight": 500 }));
+    expect(result.checks.find((c) => c.id === "tongue-share")?.status).toBe("adjust");
+    const item = checkItem(CHECK_WORDS["tongue-share"].title);
+    expect(within(item).getByTestId("finding-meaning").textContent).toMatch(/outside its band: the trailer needs loading differently/);
+    expect(item.textContent).not.toMatch(/rating is exceeded/i);
+  });
+
+  it("defines the words the page uses, from the one glossary", () => {
+    renderReport(fixture("camper-on-pickup"));
+    const words = screen.getByRole("region", { name: "Words on this page" });
+    expect(words.textContent).toContain("GCWR (gross combined weight rating)");
+    expect(words.textContent).toContain("Weight distribution (WD)");
+    expect(words.querySelector("#term-gvwr")).toBeTruthy();
   });
 
   it("names, in plain words, the checks that lacked data", () => {
@@ -285,7 +320,7 @@ describe("ResultReport charts, cautions and footer", () => {
     for (const caution of result.verdict.cautions) expect(within(cautions).getByText(caution)).toBeTruthy();
     expect(cautions.textContent).toMatch(/lowest rating/);
     expect(cautions.textContent).toMatch(/torque/);
-    expect(cautions.textContent).toMatch(/licensed installer/);
+    expect(cautions.textContent).toMatch(/qualified installer/);
   });
 
   it("still shows cautions when a saved result carries none", () => {

@@ -21,7 +21,9 @@ describe("verdict", () => {
     expect(text).toMatch(/lowest rating/);
     expect(text).toMatch(/Weigh the loaded rig/);
     expect(text).toMatch(/torque values/);
-    expect(text).toMatch(/Local law and a licensed installer/);
+    expect(text).toMatch(/local law and a qualified installer have the last word/);
+    expect(text).toMatch(/does the arithmetic/);
+    expect(text).not.toMatch(/licensed installer/);
   });
 
   it("is tight when a margin is under 10 % of its limit", () => {

@@ -23,7 +23,7 @@ export default async function NewLessonPage({ searchParams }: { searchParams: Pr
   const defaults = check
     ? {
         title: `${check.vehicleLabel ?? "Vehicle"} with ${check.hitchedLabel ?? "its load"}`,
-        story: "A customer asked at the counter whether this rig is safe and legal. Tell the learner who they are and what they want to tow or carry.",
+        story: "A customer asked at the counter whether this rig fits its ratings. Tell the learner who they are and what they want to tow or carry.",
         question: "Is this rig within its ratings, and which limit is closest?",
         rule: "The lowest rating of any part is the limit for the whole rig.",
         checkId: checkFamily && (LESSON_FAMILY_IDS as string[]).includes(checkFamily) ? checkFamily : "weakest-link",

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { Practice } from "@/components/training/practice";
 import { LessonConclusion } from "@/components/training/lesson-conclusion";
-import { LessonStory } from "@/components/training/lesson-view";
+import { LessonStory, LessonWords } from "@/components/training/lesson-view";
 import { Card, CardBody, PageHeader } from "@/components/ui";
 import { requirePage } from "@/lib/server/access";
 import { getPreparedLesson } from "@/lib/server/training";
@@ -33,6 +33,11 @@ export default async function PractisePage({ params }: { params: Promise<{ id: s
       <Card>
         <CardBody>
           <Practice lessonId={lesson.id} steps={prepared.steps} submit={submitAttemptAction} conclusion={<LessonConclusion lesson={prepared} />} />
+        </CardBody>
+      </Card>
+      <Card>
+        <CardBody>
+          <LessonWords lesson={prepared} />
         </CardBody>
       </Card>
     </div>
