@@ -245,9 +245,10 @@ export const TERMS = [
   },
   {
     id: "overhang",
-    term: "Overhang (rear axle to ball)",
-    names: ["overhang", "rear axle to ball"],
-    definition: "How far behind the rear axle centre the load acts: the ball for a trailer, the pin hole plus the load's distance for a rack.",
+    term: "Overhang (rear axle to pin hole, and on to the ball)",
+    names: ["overhang", "rear axle to pin hole", "rear axle to pin", "rear axle to ball"],
+    definition:
+      "How far behind the rear axle centre the load acts. What is measured is the rear axle centre to the receiver pin hole, along the ground; for a trailer the ball mount's length and any extender are added to reach the ball, for a rack or carrier the load's own distance from the pin hole.",
   },
   {
     id: "axle-load",

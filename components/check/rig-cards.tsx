@@ -9,6 +9,7 @@ import { useFormContext, useWatch } from "react-hook-form";
 import { Field, Select, cn } from "@/components/ui";
 import { formatQuantity } from "@/lib/format";
 import { ACCESSORY_TYPES, BALL_SIZES, BRAKE_TYPES, RECEIVER_SIZES, TRAILER_TYPES, type AccessoryType, type TrailerType } from "@/lib/towing";
+import { TermHelp } from "@/components/glossary/term-help";
 import { ChoiceField, FieldGrid, FieldGroup, MoreMeasurements, NumField, unitFor, useUnits } from "./field-parts";
 import type { HitchedKind, RigFormValues } from "./rig-form";
 
@@ -149,7 +150,7 @@ function HitchDiagram() {
 function FenderDiagram() {
   return (
     <figure className="rounded-md border border-rule bg-paper/70 p-2 sm:max-w-xs">
-      <svg viewBox="0 0 240 92" className="block w-full" role="img" aria-label="Front fender height runs from the ground straight up to the lip of the front wheel well, above the wheel centre.">
+      <svg viewBox="0 0 240 92" className="block w-full" role="img" aria-label="Front fender height runs from the ground straight up to the lip of the front wheel opening, directly above the wheel centre.">
         <defs>
           <marker id="fender-diagram-arrow" viewBox="0 0 10 10" refX="5" refY="5" markerWidth="6" markerHeight="6" orient="auto-start-reverse">
             <path d="M 0 1 L 9 5 L 0 9 z" fill="var(--color-ink)" />
@@ -159,8 +160,8 @@ function FenderDiagram() {
         <path d="M 10 40 L 62 40 A 34 34 0 0 1 130 40 L 230 40" fill="none" stroke="var(--color-ink-soft)" strokeWidth="1.5" />
         <circle cx="96" cy="60" r="24" fill="var(--color-sunken)" stroke="var(--color-ink-soft)" strokeWidth="1.5" />
         <line x1="96" y1="84" x2="96" y2="7" stroke="var(--color-ink)" markerStart="url(#fender-diagram-arrow)" markerEnd="url(#fender-diagram-arrow)" />
-        <text x="140" y="22" fontSize="10" fill="var(--color-ink)">ground to wheel-well lip,</text>
-        <text x="140" y="34" fontSize="10" fill="var(--color-ink)">above the wheel centre</text>
+        <text x="140" y="22" fontSize="10" fill="var(--color-ink)">ground to wheel-opening lip,</text>
+        <text x="140" y="34" fontSize="10" fill="var(--color-ink)">straight above the wheel centre</text>
       </svg>
     </figure>
   );
@@ -174,35 +175,35 @@ export function VehicleFields({ tools }: { tools?: ReactNode }) {
       {tools}
       <FieldGroup title="Ratings" note="From the owner's manual (towing section) and the door-jamb label.">
         <FieldGrid>
-          <NumField name="vehicle.towRating" label="Tow rating" kind="mass" help="Owner's manual, towing section: the figure without weight distribution." />
-          <NumField name="vehicle.tongueWeightLimit" label="Tongue-weight limit" kind="mass" help="Owner's manual, towing section." />
-          <NumField name="vehicle.gvwr" label="GVWR" kind="mass" help="Door-jamb label, driver's side." />
-          <NumField name="vehicle.curbWeight" label="Curb weight" kind="mass" help="Owner's manual, or GVWR less the label's payload." />
-          <NumField name="vehicle.gcwr" label="GCWR" kind="mass" help="Owner's manual, towing section." />
-          <NumField name="vehicle.gawrFront" label="Front GAWR" kind="mass" help="Door-jamb label." />
-          <NumField name="vehicle.gawrRear" label="Rear GAWR" kind="mass" help="Door-jamb label." />
+          <NumField name="vehicle.towRating" label="Tow rating" kind="mass" help={<TermHelp term="weight-carrying">Owner&rsquo;s manual, towing section: the weight-carrying figure, without weight distribution.</TermHelp>} />
+          <NumField name="vehicle.tongueWeightLimit" label="Tongue-weight limit" kind="mass" help={<TermHelp term="tongue-weight">Owner&rsquo;s manual, towing section.</TermHelp>} />
+          <NumField name="vehicle.gvwr" label="GVWR" kind="mass" help={<TermHelp term="gvwr">Door-jamb label, driver&rsquo;s side.</TermHelp>} />
+          <NumField name="vehicle.curbWeight" label="Curb weight" kind="mass" help={<TermHelp term="curb-weight">Weigh it empty with a full tank, or take the maker&rsquo;s figure. It is not on the tyre and loading label, which gives occupants plus cargo.</TermHelp>} />
+          <NumField name="vehicle.gcwr" label="GCWR" kind="mass" help={<TermHelp term="gcwr">Owner&rsquo;s manual, towing section.</TermHelp>} />
+          <NumField name="vehicle.gawrFront" label="Front GAWR" kind="mass" help={<TermHelp term="gawr">Door-jamb label.</TermHelp>} />
+          <NumField name="vehicle.gawrRear" label="Rear GAWR" kind="mass" help={<TermHelp term="gawr">Door-jamb label.</TermHelp>} />
         </FieldGrid>
       </FieldGroup>
       <FieldGroup title="Lengths" note="A tape measure along the ground, or the owner's manual's dimensions page.">
         <FieldGrid>
-          <NumField name="vehicle.wheelbase" label="Wheelbase" kind="length" help="Front axle centre to rear axle centre." />
-          <NumField name="vehicle.rearAxleToPin" label="Rear axle to pin hole" kind="length" help="Rear axle centre to the receiver's pin hole, along the ground: the installer's figure after fitting. The ball mount's length and any extender are added to reach the ball." />
+          <NumField name="vehicle.wheelbase" label="Wheelbase" kind="length" help="Front wheel centre to rear wheel centre." />
+          <NumField name="vehicle.rearAxleToPin" label="Rear axle to pin hole" kind="length" help={<TermHelp term="overhang">Along the ground from the rear axle centre to the receiver pin hole: the installer&rsquo;s figure after fitting. The ball mount&rsquo;s length and any extender are added to reach the ball.</TermHelp>} />
         </FieldGrid>
       </FieldGroup>
       <FieldGroup title="Load in the vehicle" note="What rides along when it tows. Ask, or weigh.">
         <FieldGrid>
           <NumField name="load.occupants" label="Occupants" kind="mass" help="Everyone who rides, together." />
           <NumField name="load.cargo" label="Cargo" kind="mass" help="Luggage and gear in the vehicle." />
-          <NumField name="load.hitchHardware" label="Hitch hardware" kind="mass" help="Ball mount or weight-distribution head and bars: the maker's sheet or a bathroom scale." />
+          <NumField name="load.hitchHardware" label="Hitch hardware" kind="mass" help={<TermHelp term="hitch-hardware">Ball mount, or weight-distribution head and bars: the maker&rsquo;s sheet or a bathroom scale.</TermHelp>} />
         </FieldGrid>
       </FieldGroup>
       <MoreMeasurements>
         <FieldGrid>
           <NumField name="vehicle.towRatingWd" label="Tow rating with weight distribution" kind="mass" help="Owner's manual, towing section." />
           <NumField name="vehicle.tongueWeightLimitWd" label="Tongue-weight limit with weight distribution" kind="mass" help="Owner's manual, towing section." />
-          <NumField name="vehicle.wdRequiredAbove" label="Weight distribution required above" kind="mass" help="Owner's manual: the trailer weight above which it is required." />
-          <NumField name="vehicle.payloadLabel" label="Payload on the label" kind="mass" help="Tyre and loading label on the door jamb." />
-          <NumField name="vehicle.departureAngle" label="Departure angle" kind="angle" help="Owner's manual, dimensions page." />
+          <NumField name="vehicle.wdRequiredAbove" label="Weight distribution required above" kind="mass" help={<TermHelp term="weight-distribution">Owner&rsquo;s manual: the trailer weight above which the maker requires it.</TermHelp>} />
+          <NumField name="vehicle.payloadLabel" label="Payload on the label" kind="mass" help={<TermHelp term="payload">Tyre and loading label on the door jamb: the combined weight of occupants and cargo.</TermHelp>} />
+          <NumField name="vehicle.departureAngle" label="Departure angle" kind="angle" help={<TermHelp term="departure-angle">Owner&rsquo;s manual, dimensions page.</TermHelp>} />
         </FieldGrid>
         <FieldGroup title="Weighed axle loads, unhitched" note="A public axle scale, vehicle loaded as it will travel.">
           <FieldGrid>
@@ -233,15 +234,15 @@ export function HitchFields({ kind }: { kind: HitchedKind }) {
       <FieldGroup title="Receiver" note="Ratings from the hitch's own label or stamp; heights and distances with a tape measure.">
         <div className="flex flex-col gap-4 sm:flex-row sm:items-start">
           <FieldGrid className="flex-1">
-            <ChoiceField name="hitch.class" label="Hitch class" numeric emptyLabel="Not given" options={[1, 2, 3, 4, 5].map((n) => ({ value: String(n), label: `Class ${n}` }))} help="On the hitch's label." />
+            <ChoiceField name="hitch.class" label="Hitch class" numeric emptyLabel="Not given" options={[1, 2, 3, 4, 5].map((n) => ({ value: String(n), label: `Class ${n}` }))} help={<TermHelp term="hitch-class">On the hitch&rsquo;s label. The class is a ceiling; the label&rsquo;s own rating governs.</TermHelp>} />
             <ChoiceField name="hitch.receiverSize" label="Receiver size" emptyLabel="Not given" options={RECEIVER_SIZES.map(inches)} help="Inside width of the opening." />
           </FieldGrid>
         </div>
         <FieldGrid className="mt-4">
-          <NumField name="hitch.gtwRating" label="Hitch GTW rating" kind="mass" help="Hitch label: gross trailer weight, weight-carrying." />
-          <NumField name="hitch.twRating" label="Hitch TW rating" kind="mass" help="Hitch label: tongue weight, weight-carrying." />
-          <NumField name="hitch.receiverHeight" label="Receiver height" kind="length" help="Ground to the top inside edge of the receiver opening, vehicle loaded." />
-          <NumField name="hitch.pinToFascia" label="Pin to fascia" kind="length" help="Centre of the pin hole forward to the outermost point of the bumper." />
+          <NumField name="hitch.gtwRating" label="Hitch GTW rating" kind="mass" help={<TermHelp term="gross-trailer-weight">Hitch label: gross trailer weight, weight-carrying line.</TermHelp>} />
+          <NumField name="hitch.twRating" label="Hitch TW rating" kind="mass" help={<TermHelp term="tongue-weight">Hitch label: tongue weight, weight-carrying line.</TermHelp>} />
+          <NumField name="hitch.receiverHeight" label="Receiver height" kind="length" help={<TermHelp term="receiver">Ground to the top inside edge of the receiver opening, vehicle loaded, unhitched.</TermHelp>} />
+          <NumField name="hitch.pinToFascia" label="Pin to fascia" kind="length" help={<TermHelp term="fascia" question="What is the fascia?">Centre of the pin hole forward to the outermost point of the bumper.</TermHelp>} />
         </FieldGrid>
         <div className="mt-4">
           <HitchDiagram />
@@ -249,7 +250,7 @@ export function HitchFields({ kind }: { kind: HitchedKind }) {
         <div className="mt-4">
           <MoreMeasurements label="Ratings with weight distribution">
             <FieldGrid>
-              <NumField name="hitch.gtwRatingWd" label="Hitch GTW rating with WD" kind="mass" help="Hitch label, weight-distributing line." />
+              <NumField name="hitch.gtwRatingWd" label="Hitch GTW rating with WD" kind="mass" help={<TermHelp term="weight-distribution">Hitch label, weight-distributing line.</TermHelp>} />
               <NumField name="hitch.twRatingWd" label="Hitch TW rating with WD" kind="mass" help="Hitch label, weight-distributing line." />
             </FieldGrid>
           </MoreMeasurements>
@@ -258,21 +259,21 @@ export function HitchFields({ kind }: { kind: HitchedKind }) {
       {kind === "trailer" ? (
         <FieldGroup title="Ball mount" note="Stamped on the ball mount; rise or drop and length with a tape measure.">
           <FieldGrid>
-            <NumField name="ballMount.drop" label="Drop (negative for a rise)" kind="length" help="Top of the shank to the top of the ball platform. A rise is a negative figure." />
+            <NumField name="ballMount.drop" label="Drop (negative for a rise)" kind="length" help={<TermHelp term="ball-platform">Top of the shank down to the top of the ball platform. A rise is a negative figure.</TermHelp>} />
             <NumField name="ballMount.length" label="Ball mount length" kind="length" help="Pin hole to the ball's centre." />
             <NumField name="ballMount.gtwRating" label="Ball mount GTW rating" kind="mass" help="Stamp on the ball mount." />
             <NumField name="ballMount.twRating" label="Ball mount TW rating" kind="mass" help="Stamp on the ball mount." />
           </FieldGrid>
           <div className="mt-4">
             <MoreMeasurements>
-              <NumField name="ballMount.squatAllowance" label="Expected rear squat" kind="length" help="How far the rear drops once hitched: the fender height difference, or an estimate." />
+              <NumField name="ballMount.squatAllowance" label="Expected rear squat" kind="length" help={<TermHelp term="squat">How far the receiver comes down once hitched: receiver height unhitched minus receiver height hitched, or an estimate.</TermHelp>} />
             </MoreMeasurements>
           </div>
         </FieldGroup>
       ) : null}
       <FieldGroup title="Extender" note="Only if one is fitted: its own label gives its rating, often lower than the hitch's.">
         <FieldGrid>
-          <NumField name="extender.length" label="Extender length" kind="length" help="How far it moves the pin hole back." />
+          <NumField name="extender.length" label="Extender length" kind="length" help={<TermHelp term="extender">How far it moves the pin hole back.</TermHelp>} />
           <NumField name="extender.twRating" label="Extender TW rating" kind="mass" help="The extender's label." />
           <NumField name="extender.gtwRating" label="Extender GTW rating" kind="mass" help="The extender's label, if it gives one." />
         </FieldGrid>
@@ -349,8 +350,8 @@ export function TrailerFields({ tools }: { tools?: ReactNode }) {
       <FieldGroup title="Trailer">
         <FieldGrid>
           <ChoiceField name="trailer.type" label="Trailer type" options={TRAILER_TYPES.map((t) => ({ value: t, label: TRAILER_TYPE_LABELS[t] }))} help="Sets the usual tongue-weight band." />
-          <NumField name="trailer.grossTrailerWeight" label="Gross trailer weight" kind="mass" help="Loaded as it will travel: a public scale, or the trailer's own GVWR as the upper bound." />
-          <NumField name="trailer.tongueWeight" label="Tongue weight" kind="mass" help="A tongue scale, a bathroom scale and beam, or the difference at a public scale." />
+          <NumField name="trailer.grossTrailerWeight" label="Gross trailer weight" kind="mass" help={<TermHelp term="gross-trailer-weight">Loaded as it will travel: a public scale, or the trailer&rsquo;s own GVWR as the upper bound.</TermHelp>} />
+          <NumField name="trailer.tongueWeight" label="Tongue weight" kind="mass" help={<TermHelp term="tongue-weight">A tongue scale, a bathroom scale and beam, or the difference at a public scale; spring bars released.</TermHelp>} />
           <TongueBasis />
         </FieldGrid>
       </FieldGroup>
@@ -361,25 +362,25 @@ export function TrailerFields({ tools }: { tools?: ReactNode }) {
           <ChoiceField name="trailer.couplerBallSize" label="Coupler ball size" emptyLabel="Not given" options={BALL_SIZES.map(inches)} help="Stamped on the coupler." />
           <ChoiceField name="trailer.ballSize" label="Ball size" emptyLabel="Not given" options={BALL_SIZES.map(inches)} help="Stamped on top of the ball." />
           <NumField name="trailer.ballRating" label="Ball rating" kind="mass" help="Stamped on top of the ball." />
-          <NumField name="trailer.safetyChainRating" label="Safety chain rating (each)" kind="mass" help="Tag or stamp on each chain." />
-          <ChoiceField name="trailer.brakes" label="Trailer brakes" emptyLabel="Not given" options={BRAKE_TYPES.map((b) => ({ value: b, label: BRAKE_LABELS[b] }))} />
+          <NumField name="trailer.safetyChainRating" label="Safety chain rating (each)" kind="mass" help={<TermHelp term="safety-chains" question="What are safety chains?">Tag or stamp on each chain.</TermHelp>} />
+          <ChoiceField name="trailer.brakes" label="Trailer brakes" emptyLabel="Not given" options={BRAKE_TYPES.map((b) => ({ value: b, label: BRAKE_LABELS[b] }))} help={<TermHelp term="surge-brakes" question="What are surge brakes?">Electric brakes need a brake controller in the vehicle; surge brakes work from the trailer pushing on the ball.</TermHelp>} />
         </FieldGrid>
       </FieldGroup>
-      <FieldGroup title="Weight distribution" note="Front fender height at the wheel-well lip, above the wheel centre, on level ground: unhitched, hitched with the bars off, hitched with the bars on.">
+      <FieldGroup title="Weight distribution" note="Front fender height: ground to the lip of the front wheel opening, straight above the wheel centre, on level ground. Unhitched, hitched with the spring bars released, then hitched with the bars set. Chock the trailer first.">
         <div className="space-y-4">
           <WdUsed />
           <FieldGrid>
-            <NumField name="weightDistribution.tongueRating" label="WD tongue rating" kind="mass" help="Label on the spring bars or head." />
+            <NumField name="weightDistribution.tongueRating" label="WD tongue rating" kind="mass" help={<TermHelp term="weight-distribution">Label on the spring bars or head.</TermHelp>} />
             <NumField name="weightDistribution.fenderUnhitched" label="Fender height, unhitched" kind="length" help="Tape measure, before hitching." />
-            <NumField name="weightDistribution.fenderHitched" label="Fender height, hitched" kind="length" help="Trailer on the ball, bars released." />
-            <NumField name="weightDistribution.fenderWithWd" label="Fender height, hitched with WD" kind="length" help="Bars tensioned as they will travel." />
+            <NumField name="weightDistribution.fenderHitched" label="Fender height, hitched" kind="length" help="Trailer on the ball and chocked, spring bars released." />
+            <NumField name="weightDistribution.fenderWithWd" label="Fender height, hitched with WD" kind="length" help={<TermHelp term="spring-bars" question="Why keep clear?">Spring bars set as they will travel, with the maker&rsquo;s handle; keep hands and feet clear of a bar under tension.</TermHelp>} />
           </FieldGrid>
           <FenderDiagram />
         </div>
       </FieldGroup>
       <MoreMeasurements>
-        <NumField name="weightDistribution.restorationTarget" label="Front restoration target" kind="percent" help="Share of the lost front-axle load to give back; the owner's manual may set it (often 50 %)." />
-        <FieldGroup title="Tongue weighed with a scale" note="A scale straight under the jack, or a bathroom scale under a beam resting on a block.">
+        <NumField name="weightDistribution.restorationTarget" label="Front restoration target" kind="percent" help={<TermHelp term="restoration">Share of the lost front-axle load to give back; the owner&rsquo;s manual may set it (often 50 %).</TermHelp>} />
+        <FieldGroup title="Tongue weighed with a scale" note="A scale straight under the jack, or a bathroom scale under a beam resting on a block. Chock the trailer&rsquo;s wheels before lifting the tongue off the ball.">
           <FieldGrid>
             <NumField name="trailer.tongueMeasurement.scaleReading" label="Scale reading" kind="mass" />
             <NumField name="trailer.tongueMeasurement.blockToJack" label="Block to jack" kind="length" help="Beam method only: the block's centre to the jack." />
@@ -401,14 +402,14 @@ export function AccessoryFields({ tools }: { tools?: ReactNode }) {
           <NumField name="accessory.weight" label="Accessory weight" kind="mass" help="Its own weight, empty." />
           <NumField name="accessory.loadWeight" label="Load on it" kind="mass" help="Bikes, boxes: weigh them." />
           <NumField name="accessory.loadCenterFromPin" label="Pin to the load's centre" kind="length" help="Pin hole back to the middle of the load." />
-          <NumField name="accessory.foldClearance" label="Fold clearance needed" kind="length" help="Maker's sheet: room it needs between the pin hole and the bumper when folded up." />
+          <NumField name="accessory.foldClearance" label="Fold clearance needed" kind="length" help={<TermHelp term="fascia" question="What is the fascia?">Maker&rsquo;s sheet: room it needs between the pin hole and the bumper fascia when folded up.</TermHelp>} />
         </FieldGrid>
       </FieldGroup>
       <FieldGroup title="Lowest point" note="With the accessory fitted and loaded: find the part nearest the ground.">
         <FieldGrid>
           <NumField name="accessory.lowestPointBelowShankTop" label="Lowest point below the shank top" kind="length" help="Top of the shank down to the lowest point (negative if above)." />
           <NumField name="accessory.lowestPointBehindPin" label="Lowest point behind the pin" kind="length" help="Pin hole back to the lowest point, along the ground." />
-          <NumField name="accessory.shankRise" label="Shank rise" kind="length" help="A raised shank lifts the accessory; negative for a drop." />
+          <NumField name="accessory.shankRise" label="Shank rise" kind="length" help={<TermHelp term="shank-rise">How far the shank lifts the accessory; negative for a drop. More shank rise often lowers the rack maker&rsquo;s rating and can hide the lights or the number plate.</TermHelp>} />
         </FieldGrid>
       </FieldGroup>
     </>

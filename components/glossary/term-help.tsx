@@ -5,6 +5,12 @@
 import type { ReactNode } from "react";
 import { TERM_BY_ID, type TermId } from "@/lib/glossary";
 
+/** "What is GVWR?", "What is weight-carrying?": the term without its expansion, a word lower-cased. */
+function defaultQuestion(term: string): string {
+  const name = term.replace(/ \(.*\)$/, "");
+  return `What is ${/^[A-Z]{2,}/.test(name) ? name : name.charAt(0).toLowerCase() + name.slice(1)}?`;
+}
+
 export function TermHelp({ term, question, children }: { term: TermId; question?: string; children?: ReactNode }) {
   const entry = TERM_BY_ID[term];
   return (
@@ -12,7 +18,7 @@ export function TermHelp({ term, question, children }: { term: TermId; question?
       {children ? <span>{children} </span> : null}
       <details className="group inline">
         <summary className="inline cursor-pointer text-accent-strong underline decoration-dotted underline-offset-2 select-none">
-          {question ?? `What is ${entry.term.replace(/ \(.*\)$/, "")}?`}
+          {question ?? defaultQuestion(entry.term)}
         </summary>
         <span className="mt-0.5 block text-ink-soft">{entry.definition}</span>
       </details>
