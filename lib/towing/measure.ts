@@ -36,9 +36,10 @@ export function tongueWeightByScale(input: { scaleReading: number; units: UnitSy
         result: { symbol: "TW", value: scaleReading, unit: wu },
       },
     ],
+    // Common practice, no published source: chocking before the tongue comes off the ball.
     cautions: withinScaleRange
-      ? ["Keep the coupler at its towing height and the trailer loaded as it will travel."]
-      : ["This is more than a bathroom scale reads reliably; use the beam method or a public scale."],
+      ? ["Chock the trailer's wheels before lifting the tongue off the ball.", "Keep the coupler at its towing height and the trailer loaded as it will travel."]
+      : ["Chock the trailer's wheels before lifting the tongue off the ball.", "This is more than a bathroom scale reads reliably; use the beam method or a public scale."],
   };
 }
 
@@ -87,10 +88,16 @@ export function tongueWeightByBeam(input: {
           { symbol: "k", label: "Lever ratio", value: multiplier, unit: "" },
         ],
         result: { symbol: "TW", value: tw, unit: wu },
-        note: "Subtract nothing for the beam if the scale was zeroed with the beam and block on it.",
+        // The block stands on the ground; only the pipe and the beam's end rest on the scale.
+        note: "Subtract nothing if the scale was zeroed with the pipe and the beam's end resting on it; otherwise take off what it read with them alone.",
       },
     ],
-    cautions: ["Release the weight distribution before you measure.", "Keep the beam level and the coupler at its towing height."],
+    // Common practice, no published source: chocking and keeping clear of a jacked tongue.
+    cautions: [
+      "Chock the trailer's wheels before lifting the tongue off the ball, and keep hands and feet from under the tongue.",
+      "Release the weight distribution before you measure.",
+      "Keep the beam level and the coupler at its towing height.",
+    ],
   };
 }
 

@@ -49,10 +49,10 @@ export const LIBRARY: readonly LibraryExample[] = [
     slug: "lowest-rating-governs",
     title: "The hitch, not the truck, sets the limit",
     story:
-      "Tamsin Oakhollow runs a fencing crew out of Brackenfold. Her pickup's manual says it tows 7,000 lb, so she wants to pull a 4,600 lb utility trailer loaded with posts. The receiver bolted under the truck is a Class 3 hitch.",
+      "Tamsin Oakhollow runs a fencing crew out of Brackenfold. Her pickup's manual says it tows 7,000 lb, so she wants to pull a 4,600 lb utility trailer loaded with posts. The receiver bolted under the truck is a Class 3 hitch; its own label reads 5,000 lb gross trailer weight and 600 lb tongue weight.",
     question: "Which part limits the gross trailer weight, and how much room is left under it?",
     checkId: "weakest-link",
-    rule: "Every part between the vehicle and the trailer has its own rating; the lowest one is the limit for the whole rig. A Class 3 receiver is rated for a gross trailer weight up to 5,000 lb (SAE J684).",
+    rule: "Every part between the vehicle and the trailer has its own rating; the lowest one is the limit for the whole rig. A hitch class only sets a ceiling (SAE J684 puts Class 3 at up to 5,000 lb); the hitch's own label gives its rating, which may be lower. A part can be replaced by a stronger one; the vehicle's own ratings cannot be bought past.",
     keyStep: "lowest-gtw-rating",
     rig: {
       units: "imperial",
@@ -95,10 +95,10 @@ export const LIBRARY: readonly LibraryExample[] = [
     slug: "family-full-of-payload",
     title: "Five seats, a cooler and a camper tongue",
     story:
-      "The Velloway family bought a small travel trailer and will tow it with their three-row SUV: five people (750 lb together), 200 lb of luggage, a 40 lb ball mount, and 450 lb on the tongue. The door label gives a GVWR of 6,000 lb; the curb weight is 4,650 lb.",
+      "The Velloway family bought a small travel trailer and will tow it with their three-row SUV: five people (750 lb together), 200 lb of luggage with the cooler, a 40 lb ball mount, and 450 lb on the tongue. The door label gives a GVWR of 6,000 lb; the curb weight is 4,650 lb.",
     question: "What is the SUV's payload capacity, and does the family's load fit in it?",
     checkId: "payload",
-    rule: "Payload is GVWR minus curb weight (49 CFR 567.4(g)(3)). People, cargo, hitch hardware and the tongue weight all count against it.",
+    rule: "Payload is GVWR minus curb weight (49 CFR 567.4(g)(3)); curb weight is the vehicle empty with a full tank. People, cargo, hitch hardware and the tongue weight all count against it. Weight distribution does not add payload: the answer is a lighter load.",
     keyStep: "payload-capacity",
     rig: {
       units: "imperial",
@@ -112,16 +112,16 @@ export const LIBRARY: readonly LibraryExample[] = [
     slug: "count-the-tongue-once",
     title: "Count the tongue weight once",
     story:
-      "Perrin Ashdown hauls a skid steer on a 7,500 lb equipment trailer with a heavy-duty pickup (curb weight 5,400 lb). Two people ride (350 lb), 250 lb of tools are in the bed, and the hitch hardware weighs 60 lb. The truck's GCWR is 13,000 lb.",
+      "Perrin Ashdown wants to haul a skid steer on a 7,500 lb equipment trailer with his half-ton pickup (curb weight 5,400 lb). Two people ride (350 lb), 250 lb of tools are in the bed, and the hitch hardware weighs 60 lb. The truck's GCWR is 13,000 lb. (At this trailer weight the truck's maker would also require weight distribution; this example looks only at the combined weight.)",
     question: "What does the whole combination weigh, and is it within the GCWR?",
     checkId: "combined-weight",
-    rule: "Combined weight is the loaded tow vehicle plus the whole trailer. The tongue weight is already part of the trailer's weight: adding it again counts it twice. The combination must not exceed the GCWR.",
+    rule: "Combined weight is the loaded tow vehicle plus the whole trailer. The tongue weight is already part of the trailer's weight: adding it again counts it twice. The combination must not exceed the GCWR, which caps everything: people and cargo included. Weight distribution does not raise it: the answer is a lighter trailer or load, or a heavier-rated truck.",
     keyStep: "combined",
     rig: {
       units: "imperial",
-      name: "Perrin's heavy-duty pickup with the equipment trailer (invented)",
-      vehicle: { towRating: 9000, tongueWeightLimit: 900, gvwr: 8500, curbWeight: 5400, gcwr: 13000 },
-      trailer: { type: "car-hauler", grossTrailerWeight: 7500, tongueWeight: 900, tongueWeightBasis: "measured" },
+      name: "Perrin's half-ton pickup with the equipment trailer (invented)",
+      vehicle: { towRating: 9000, tongueWeightLimit: 900, gvwr: 7100, curbWeight: 5400, gcwr: 13000, wdRequiredAbove: 5000 },
+      trailer: { type: "car-hauler", grossTrailerWeight: 7500, tongueWeight: 900, tongueWeightBasis: "measured", brakes: "electric" },
       load: { occupants: 350, cargo: 250, hitchHardware: 60 },
     },
   },
@@ -129,10 +129,10 @@ export const LIBRARY: readonly LibraryExample[] = [
     slug: "tongue-load-on-the-axles",
     title: "Where an 800 lb tongue load really goes",
     story:
-      "Marit Quenby weighed her pickup axle by axle before hitching: 3,100 lb front, 2,600 lb rear. The ball sits 50 in behind the rear axle, the wheelbase is 145 in, and her travel trailer puts 800 lb on the ball. She tows without weight distribution.",
+      "Marit Quenby weighed her pickup axle by axle before hitching: 3,100 lb front, 2,600 lb rear. The ball sits 50 in behind the rear axle, the wheelbase is 145 in, and her travel trailer puts 800 lb on the ball. She tows without weight distribution for now, though for a 6,400 lb trailer her truck's maker would usually require it.",
     question: "How much load does each axle gain or lose when the trailer is hitched?",
     checkId: "axle-loads",
-    rule: "A tongue load behind the rear axle acts like a lever over it: the rear axle carries more than the tongue weight and the front axle is lifted. Rear gain = TW × (WB + OH) ÷ WB; front change = −TW × OH ÷ WB (statics, moments about the axles).",
+    rule: "A tongue load behind the rear axle acts like a lever over it: the rear axle carries more than the tongue weight and the front axle is lightened, so it steers and brakes with less grip. Rear gain = TW × (WB + OH) ÷ WB; front change = −TW × OH ÷ WB (statics, moments about the axles). Weigh each axle hitched to compare with the GAWRs.",
     keyStep: "rear-change",
     rig: {
       units: "imperial",
@@ -147,16 +147,16 @@ export const LIBRARY: readonly LibraryExample[] = [
     slug: "give-the-front-axle-back",
     title: "Giving the front axle its load back",
     story:
-      "Ysolde Farrant's camper squats her van's rear. With a tape at the front wheel arch she measured 1030 mm unhitched and 1058 mm hitched with the weight-distribution bars off. With the bars on it now reads 1046 mm. The maker asks for half of the lost front load to be given back.",
+      "Ysolde Farrant's camper squats her van's rear. On level ground, with the camper's wheels chocked, she measured from the ground to the lip of the front wheel opening, straight above the wheel centre: 1030 mm unhitched and 1058 mm hitched with the spring bars released. With the bars set (using the maker's handle, hands clear) it now reads 1046 mm. The van's maker asks for half of the lost front load to be given back.",
     question: "What front fender height should the bars give, and how much of the lost load do they give back now?",
     checkId: "weight-distribution",
-    rule: "Adjust weight distribution until the front fender sits at H1 + (H2 − H1) × (1 − target). Restoration = (H2 − H3) ÷ (H2 − H1); the usual target is 50 % (the SAE J2807 method as given in vehicle owner's manuals). Over 100 % unloads the rear.",
+    rule: "Adjust the weight distribution, as its maker's instructions say, until the front fender sits at H1 + (H2 − H1) × (1 − target). Restoration = (H2 − H3) ÷ (H2 − H1); the usual target is 50 % (the SAE J2807 method as given in vehicle owner's manuals). Over 100 % unloads the rear. Weight distribution raises no GVWR, GCWR or payload and takes no load off the ball.",
     keyStep: "target-fender-height",
     rig: {
       units: "metric",
       name: "Ysolde's van with a camper (invented)",
       vehicle: { towRating: 3000, towRatingWd: 3500, tongueWeightLimit: 250, tongueWeightLimitWd: 350 },
-      hitch: { class: 3, gtwRatingWd: 3500, twRatingWd: 350, gtwRating: 2700, twRating: 270 },
+      hitch: { class: 4, gtwRatingWd: 3500, twRatingWd: 350, gtwRating: 2700, twRating: 270 },
       trailer: { type: "travel", grossTrailerWeight: 2600, tongueWeight: 290, tongueWeightBasis: "measured" },
       weightDistribution: { used: true, tongueRating: 450, fenderUnhitched: 1030, fenderHitched: 1058, fenderWithWd: 1046, restorationTarget: 50 },
     },
@@ -165,10 +165,10 @@ export const LIBRARY: readonly LibraryExample[] = [
     slug: "riding-level",
     title: "A ball mount that rides level",
     story:
-      "Hollis Pendry's lifted pickup has the top of its receiver opening 26 in off the ground. His boat trailer's coupler sits 20 in up when the trailer is level. He brought the 4 in drop mount that came with the truck.",
+      "Hollis Pendry's lifted pickup has the top of its receiver opening 26 in off the ground. His boat trailer's coupler sits 20 in up when the trailer is level. He brought the 4 in drop mount that came with the truck, which leaves the trailer riding nose-up.",
     question: "What drop does the ball mount need, and how far off level does the 4 in mount leave the trailer?",
     checkId: "ball-mount",
-    rule: "Drop = height to the top of the receiver opening − height to the bottom of the coupler, with the trailer level (a negative answer is a rise). A trailer riding nose-up or nose-down shifts load and brakes unevenly.",
+    rule: "Drop = height to the top of the receiver opening − height to the bottom of the coupler, with the trailer level (a negative answer is a rise). Too little drop leaves the trailer nose-up, too much nose-down: either shifts load between its axles and brakes unevenly.",
     keyStep: "drop-needed",
     rig: {
       units: "imperial",
@@ -186,7 +186,7 @@ export const LIBRARY: readonly LibraryExample[] = [
       "Wren Calloway fitted a two-bike platform rack to her hatchback's receiver. The rack's lowest point sits 10 in off the ground and 30 in behind the rear axle. The car's departure angle is 21°, and the rack scraped on her steep driveway.",
     question: "At what angle does the rack meet a ramp, and how much more rise would keep the car's departure angle?",
     checkId: "accessory-fit",
-    rule: "A hitch-mounted load must not cut into the vehicle's departure angle (49 CFR 523.2): its lowest point at height h and distance x behind the rear tyre meets a slope of about atan(h ÷ x). Raise it with a rising shank, or choose a shorter rack.",
+    rule: "49 CFR 523.2 defines the departure angle; keeping a hitch-mounted load above that line is common practice. Its lowest point at height h and distance x behind the rear tyre meets a slope of about atan(h ÷ x). More shank rise lifts it, but often lowers the rack maker's rating and can hide the lights or the number plate; a shorter rack is the other way.",
     keyStep: "accessory-angle",
     rig: {
       units: "imperial",
@@ -194,6 +194,39 @@ export const LIBRARY: readonly LibraryExample[] = [
       vehicle: { tongueWeightLimit: 200, gvwr: 4100, curbWeight: 3000, rearAxleToPin: 22, departureAngle: 21 },
       hitch: { class: 1, receiverSize: "1-1/4", gtwRating: 2000, twRating: 200, receiverHeight: 13, pinToFascia: 6 },
       accessory: { type: "platform-rack", weight: 40, loadWeight: 60, loadCenterFromPin: 12, foldClearance: 4, lowestPointBelowShankTop: 3, lowestPointBehindPin: 8, shankRise: 0 },
+    },
+  },
+  {
+    slug: "weighing-a-heavy-tongue",
+    title: "Weighing a tongue too heavy for the bathroom scale",
+    story:
+      "Oriel Haskett loaded her enclosed trailer for a house move and needs its tongue weight. A bathroom scale reads reliably only to about 300 lb, so she chocked the trailer's wheels, laid a beam with one end on a wooden block and the other on a short pipe standing on the scale, and zeroed the scale with the pipe and the beam's end resting on it. She lowered the tongue jack onto the beam 1 ft from the block and 2 ft from the scale, cranked until the coupler came off the ball, and read 250 lb. The trailer weighs 6,000 lb loaded.",
+    question: "What is the lever ratio of the beam, and what tongue weight does the 250 lb reading stand for?",
+    checkId: "tongue-measure",
+    rule: "A bathroom scale under the coupler reads the tongue weight directly up to about 300 lb. Above that, a beam on a block and the scale, with the jack between them: TW = reading × (block to scale) ÷ (block to jack), here 3 × 250 = 750 lb (statics, moments about the block). Or weigh the vehicle at a public scale hitched and unhitched: the gain is the tongue weight. Chock the trailer before jacking and weigh with the spring bars released.",
+    keyStep: "beam-tongue-weight",
+    rig: {
+      units: "imperial",
+      name: "Oriel's van with an enclosed trailer (invented)",
+      vehicle: { towRating: 8000, tongueWeightLimit: 800 },
+      hitch: { class: 4, receiverSize: "2", gtwRating: 8000, twRating: 800 },
+      trailer: { type: "enclosed-cargo", grossTrailerWeight: 6000, tongueMeasurement: { scaleReading: 250, blockToJack: 12, jackToScale: 24 }, brakes: "electric" },
+    },
+  },
+  {
+    slug: "how-heavy-a-trailer",
+    title: "How heavy a trailer to shop for",
+    story:
+      "The Marrowby brothers want a car hauler for their pickup and ask how heavy a trailer it can pull as they drive it. The brochure says it tows 8,000 lb with 800 lb on the tongue; the door label gives a 7,000 lb GVWR and the manual a 13,500 lb GCWR. Loaded with the two of them, their tools and the ball mount, the truck weighed 3,350 lb front and 2,600 lb rear (rear GAWR 4,000 lb); the wheelbase is 145 in and the ball sits 48 in behind the rear axle. The hitch's label reads 10,000 lb and 1,000 lb.",
+    question: "How much trailer weight does the GCWR leave, and how heavy a trailer does the 800 lb tongue limit allow at a typical 12.5 % tongue share?",
+    checkId: "envelope",
+    rule: "Every limit counts at once: each gross-trailer-weight rating, the GCWR less the loaded vehicle, and for the tongue each rating, the payload left and the rear axle's room. Work the tongue limit at the trailer's own share: 800 lb at 12.5 % allows 6,400 lb, not the 8,000 lb on the brochure. Above about 5,000 lb most makers also require weight distribution, which raises none of these limits.",
+    keyStep: "gcwr-room",
+    rig: {
+      units: "imperial",
+      name: "The Marrowbys' pickup, loaded, before choosing a trailer (invented)",
+      vehicle: { towRating: 8000, tongueWeightLimit: 800, gvwr: 7000, gcwr: 13500, gawrFront: 3700, gawrRear: 4000, axleWeights: { front: 3350, rear: 2600 }, wheelbase: 145, rearAxleToHitch: 48 },
+      hitch: { class: 4, receiverSize: "2", gtwRating: 10000, twRating: 1000 },
     },
   },
 ];

@@ -1,6 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { rigInputSchema } from "@/lib/towing/input";
-import { LIBRARY, libraryExample } from "@/lib/training/library";
+import { CHECK_IDS } from "@/lib/towing/types";
+import { CLASS_MAX_GTW } from "@/lib/towing/checks/weakest-link";
+import { LESSON_FAMILIES, LIBRARY, libraryExample } from "@/lib/training/library";
 import { markAttempt, prepareLesson } from "@/lib/training/prepare";
 
 function keyFigure(slug: string, stepId = libraryExample(slug)!.keyStep) {
@@ -12,11 +14,10 @@ function keyFigure(slug: string, stepId = libraryExample(slug)!.keyStep) {
 }
 
 describe("the built-in library", () => {
-  it("has one example for each of the eight check families, each a valid rig that gives its steps", () => {
+  it("has one example for each check family, each a valid rig that gives its steps", () => {
     const families = LIBRARY.map((example) => example.checkId);
-    expect(new Set(families)).toEqual(
-      new Set(["weakest-link", "tongue-share", "payload", "combined-weight", "axle-loads", "weight-distribution", "ball-mount", "accessory-fit"]),
-    );
+    expect(new Set(families)).toEqual(new Set(LESSON_FAMILIES.map((family) => family.id)));
+    expect(new Set(families)).toEqual(new Set(CHECK_IDS));
     expect(new Set(LIBRARY.map((e) => e.slug)).size).toBe(LIBRARY.length);
     for (const example of LIBRARY) {
       expect(rigInputSchema.safeParse(example.rig).success, example.slug).toBe(true);
@@ -90,6 +91,67 @@ describe("the built-in library", () => {
     expect(keyFigure("rack-that-scrapes").value).toBeCloseTo(18.43, 2);
     // Physics: geometry, 30 × tan 21° − 10 = 1.52 in of extra rise
     expect(keyFigure("rack-that-scrapes", "shank-rise-needed").value).toBeCloseTo(1.516, 3);
+  });
+});
+
+describe("the two families added last", () => {
+  it("tongue weight by beam: jack 1 ft from the block and 2 ft from the scale, 250 lb reads as 750 lb", () => {
+    // Source: several published how-to guides; WAC 204-70-040(5); the formula is statics: TW = 250 × (12 + 24) ÷ 12 = 750 lb
+    expect(keyFigure("weighing-a-heavy-tongue").value).toBe(750);
+    // Statics: lever ratio (a + b) ÷ a = (12 + 24) ÷ 12 = 3
+    expect(keyFigure("weighing-a-heavy-tongue", "beam-ratio").value).toBe(3);
+    const lesson = keyFigure("weighing-a-heavy-tongue").lesson;
+    expect(lesson.conclusion.cautions.join(" ")).toMatch(/[Cc]hock/);
+  });
+
+  it("envelope: GCWR 13,500 − loaded truck 5,950 = 7,550 lb; at 12.5 % the 800 lb tongue limit allows 6,400 lb", () => {
+    // Source: GM (Cadillac) owner's manuals (the combination must not exceed GCWR): 13,500 − (3,350 + 2,600) = 7,550 lb
+    expect(keyFigure("how-heavy-a-trailer").value).toBe(7550);
+    // Physics: payload left = GVWR − weighed vehicle = 7,000 − 5,950 = 1,050 lb
+    expect(keyFigure("how-heavy-a-trailer", "payload-room").value).toBe(1050);
+    // Statics: rear axle room (4,000 − 2,600) × 145 ÷ (145 + 48) = 1,051.81 lb of tongue weight
+    expect(keyFigure("how-heavy-a-trailer", "rear-axle-room").value).toBeCloseTo(1051.81, 2);
+    // Arithmetic: at 12.5 % (the middle of the 10–15 % band, GM and Nissan owner's manuals) 800 ÷ 0.125 = 6,400 lb
+    const { lesson } = keyFigure("how-heavy-a-trailer");
+    expect(lesson.conclusion.message).toContain("6,400 lb");
+    expect(lesson.conclusion.message).not.toMatch(/up to 7,550 lb with up to 800 lb/);
+  });
+});
+
+describe("the library's stories agree with their own figures", () => {
+  it("no hitch is rated above its class's ceiling", () => {
+    // Source: New York 15 NYCRR 57.3(c) (adopts SAE J684): Class 1 ≤ 2,000 lb, 2 ≤ 3,500 lb, 3 ≤ 5,000 lb, 4 ≤ 10,000 lb
+    const ceilingLb: Record<number, number> = { 1: 2000, 2: 3500, 3: 5000, 4: 10000 };
+    expect(CLASS_MAX_GTW).toEqual(ceilingLb);
+    for (const example of LIBRARY) {
+      const h = example.rig.hitch;
+      if (!h?.class || !ceilingLb[h.class]) continue;
+      // 1 lb = 0.45359237 kg (the international pound)
+      const toLb = example.rig.units === "metric" ? 1 / 0.45359237 : 1;
+      for (const rating of [h.gtwRating, h.gtwRatingWd]) if (rating !== undefined) expect(rating * toLb, example.slug).toBeLessThanOrEqual(ceilingLb[h.class]!);
+    }
+  });
+
+  it("each title's items appear in its story", () => {
+    expect(libraryExample("family-full-of-payload")!.story).toMatch(/cooler/);
+    expect(libraryExample("count-the-tongue-once")!.story).not.toMatch(/heavy-duty/);
+  });
+
+  it("notes where a maker would usually require weight distribution", () => {
+    // Common practice, no published source: most makers require weight distribution above about 5,000 lb
+    for (const slug of ["count-the-tongue-once", "tongue-load-on-the-axles", "how-heavy-a-trailer"]) {
+      const e = libraryExample(slug)!;
+      expect(`${e.story} ${e.rule}`, slug).toMatch(/require(s)? (it|weight distribution)|would usually require/);
+    }
+  });
+
+  it("teaches no wrong reflex: a class is a ceiling, the departure angle is a definition, the front axle is lightened", () => {
+    const text = LIBRARY.map((e) => `${e.title} ${e.story} ${e.rule}`).join(" ");
+    expect(text).not.toMatch(/is rated for a gross trailer weight up to/);
+    expect(text).not.toMatch(/front axle is lifted/);
+    expect(text).not.toMatch(/must not cut into the vehicle's departure angle \(49 CFR 523\.2\)/);
+    expect(libraryExample("rack-that-scrapes")!.rule).toMatch(/523\.2 defines the departure angle/);
+    expect(libraryExample("rack-that-scrapes")!.rule).toMatch(/lowers the rack maker's rating/);
   });
 });
 
