@@ -64,7 +64,7 @@ export function wdAdvice(d: Derived, why: string): string[] {
 }
 
 /** The way to lighten a hitch load without inviting sway. */
-export const TAKE_WEIGHT_OUT = "take weight out of the trailer, keeping the tongue share inside its band (moving load rearward to lighten the tongue invites sway)";
+export const TAKE_WEIGHT_OUT = "take weight out of the trailer, keeping the tongue share inside its band (shifting load rearward instead invites sway)";
 
 /** 750 kg: the lowest brake threshold among the examples the product cites (Source: gov.uk; Australian Design Rule 38). */
 export const BRAKE_NOTE_LB = 750 / KG_PER_LB;

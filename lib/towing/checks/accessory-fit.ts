@@ -10,6 +10,7 @@
  */
 import { EPS, fA, fL, fW, iL, iN, iW, lessThan, rankOf, marginL, marginW, NO_STEPS, NO_TEXT, qL, qW, ratioOf, rL, rN, rW, statusOf, worst, type Ctx } from "../context";
 import type { Derived } from "../derive";
+import { RISE_CAUTION } from "../advice";
 import { need } from "../missing";
 import { EXTENDER_CAUTIONS } from "./weakest-link";
 import type { AccessoryFitResult, CheckStatus, Margin, MissingField, Quantity, Step } from "../types";
@@ -22,7 +23,7 @@ const RAD = 180 / Math.PI;
 const CAUTIONS = [
   "Check the accessory's own rating as well as the hitch's: the lowest one is the limit.",
   "The further the load sits from the receiver, the harder it levers on the hitch; an extender makes this worse, and extender makers often cut the rating, often by half. Use the extender's own label.",
-  "Use an anti-rattle device or a locking pin, and check the bolts and pin before each trip.",
+  "Use an anti-rattle device or a locking pin, and check the bolts and pin before each trip and again after the first few miles.",
   "Lights and the number plate must stay visible in many places: check local law.",
 ];
 
@@ -248,7 +249,7 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
       `Its moment about the pin is more than the ${fL(c, c.referenceArm)} reference arm allows for: the load counts as about ${fW(c, (d.hitchLoad ?? 0) * Math.max(1, ((a.loadCenterFromPin ?? 0) + ext) / c.referenceArm))} against the ratings. The reference arm is common practice, no published source: the accessory's and the hitch's own instructions decide.`,
     );
   if (recv !== undefined && recv <= LOW_RECEIVER_IN + EPS)
-    advice.push(`The receiver sits low (${fL(c, recv)} from the ground): a raised shank keeps the accessory clear of driveways and ramps.`);
+    advice.push(`The receiver sits low (${fL(c, recv)} from the ground): more shank rise keeps the accessory clear of driveways and ramps.`);
   if (loadPart.status === "over" || leverBeyond)
     advice.push(
       ext > 0
@@ -257,9 +258,10 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
     );
   const foldPart = parts.find((p) => p.id === "fold");
   if (foldPart?.status === "adjust") advice.push("The accessory will hit the bumper when folded: choose one that folds in the room available, or fit a short extender if its rating allows.");
-  if (groundPart.status === "adjust" && ground !== undefined && ground <= EPS) advice.push("The accessory's lowest point would touch the ground: fit a raised shank.");
+  if (groundPart.status === "adjust" && ground !== undefined && ground <= EPS) advice.push("The accessory's lowest point would touch the ground: fit a shank with more shank rise.");
   else if (riseNeeded !== undefined && riseNeeded > EPS)
     advice.push(`Add about ${fL(c, riseNeeded)} of shank rise to keep the vehicle's ${fA(v.departureAngle!)} departure angle.`);
+  if (advice.some((a) => /shank rise/.test(a))) advice.push(RISE_CAUTION);
   for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
   result.advice = advice;
   result.cautions = cautions;

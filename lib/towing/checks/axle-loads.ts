@@ -5,6 +5,7 @@
  */
 import { fL, fP, fW, govW, iL, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
 import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
+import { TAKE_WEIGHT_OUT, wdRatingsState } from "../advice";
 import { need } from "../missing";
 import type { AxleLoadsResult, CheckStatus, MissingField, Step } from "../types";
 import { axlesWithWd, wdState } from "./weight-distribution";
@@ -39,7 +40,7 @@ const MIN_SCALED_TONGUE_LB = 1;
 export const UNMEASURED_RESTORATION = { heaviest: 0, lightest: 1 } as const;
 
 const CAUTIONS = [
-  "Weight on the hitch lifts the front of the vehicle: the front tyres steer and brake with less grip.",
+  "Weight on the hitch lightens the front axle: the front tyres steer and brake with less grip.",
   "Cargo placed behind the rear axle adds to the rear axle even more than its own weight.",
 ];
 
@@ -91,7 +92,7 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
       steps.push(
         {
           id: "front-change",
-          title: "Load lifted off the front axle",
+          title: "Load taken off the front axle",
           formulaWords: "Hitch load times overhang divided by wheelbase, taken off the front",
           formula: `-${sym} * OH / WB`,
           inputs: [iW(c, sym, label, p), iL(c, "OH", ohLabel, d.overhang), iL(c, "WB", "Wheelbase", v.wheelbase)],
@@ -209,7 +210,12 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
   result.cautions = cautions;
   const advice: string[] = [];
   if (result.status === "over" && result.governing?.id === "vehicle.gawrRear")
-    advice.push("Lighten the tongue, move cargo forward in the vehicle, or use weight distribution to move load off the rear axle.");
+    advice.push(
+      `Move cargo forward in the vehicle, or ${TAKE_WEIGHT_OUT}.` +
+        (d.hasTrailer && !d.wdUsed && wdRatingsState(d) !== "exceeded"
+          ? " Weight distribution moves part of the load off the rear axle, if its ratings cover this trailer; it raises no GAWR."
+          : ""),
+    );
   if (result.status === "over" && result.governing?.id === "vehicle.gawrFront") advice.push("Move cargo off the front of the vehicle or back towards the rear axle.");
   if (result.status === "tight") advice.push("An axle is close to its rating: weigh each axle at a public scale, hitched.");
   if (result.estimated && d.wdUsed) advice.push("Measure the front fender height unhitched, hitched with the bars released, and hitched with the bars on: the loads with weight distribution are estimates until then.");

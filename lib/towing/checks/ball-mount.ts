@@ -91,6 +91,8 @@ export function checkBallMount(d: Derived, c: Ctx): BallMountResult | null {
   result.cautions = CAUTIONS;
   const advice: string[] = [];
   const word = (x: number) => wordFor(c, x);
+  // Too little drop leaves the ball high and the trailer nose-up; too much, nose-down.
+  const tilt = needed !== undefined && drop !== undefined ? (drop < needed ? "nose-up" : "nose-down") : "";
   if (needed !== undefined && (drop === undefined || !lessOrEqual(Math.abs(drop - needed), LEVEL_TOLERANCE_IN) || result.status === "tight")) {
     // Advise only a size that this same check would pass; say so when no common size does.
     const common = nearestCommonDrop(needed);
@@ -112,9 +114,9 @@ export function checkBallMount(d: Derived, c: Ctx): BallMountResult | null {
       : drop === undefined
         ? `A ${word(needed)} keeps the trailer level; the nearest common size is a ${word(nearestCommonDrop(needed))}.`
         : result.status === "adjust"
-          ? `The ball mount's ${word(drop)} leaves the trailer ${fL(c, Math.abs(drop - needed))} off level; a ${word(needed)} is needed.`
+          ? `The ball mount's ${word(drop)} leaves the trailer ${fL(c, Math.abs(drop - needed))} off level, ${tilt}; a ${word(needed)} is needed.`
           : result.status === "tight"
-            ? `The ball mount's ${word(drop)} leaves the trailer ${fL(c, Math.abs(drop - needed))} off level, at the edge of the ${fL(c, LEVEL_TOLERANCE_IN)} allowed; a ${word(needed)} would level it.`
+            ? `The ball mount's ${word(drop)} leaves the trailer ${fL(c, Math.abs(drop - needed))} off level, ${tilt}, at the edge of the ${fL(c, LEVEL_TOLERANCE_IN)} allowed; a ${word(needed)} would level it.`
           : Math.abs(drop - needed) < 0.05
             ? `The ball mount's ${word(drop)} keeps the trailer level.`
             : `The ball mount's ${word(drop)} keeps the trailer within ${fL(c, Math.abs(drop - needed))} of level.`;

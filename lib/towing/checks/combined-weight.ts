@@ -4,16 +4,13 @@
  */
 import { fP, fW, govW, iW, marginW, NO_STEPS, NO_TEXT, qW, rW, statusOf, withMissing, type Ctx } from "../context";
 import type { Derived } from "../derive";
+import { brakeCautions } from "../advice";
 import { need } from "../missing";
-import { KG_PER_LB } from "../units";
 import type { CheckResult, MissingField, Step } from "../types";
-
-/** 750 kg: UK brake threshold (Source: gov.uk), the lowest of the examples the product cites. */
-const BRAKE_NOTE_LB = 750 / KG_PER_LB;
 
 const CAUTIONS = [
   "The tongue weight is already part of the trailer's weight: it is not counted twice.",
-  "GCWR assumes the vehicle's own equipment and a driver; a rig near it climbs, stops and cools poorly.",
+  "The GCWR caps the whole rig: the vehicle with everyone and everything in it, plus the loaded trailer. A rig near it climbs, stops and cools poorly.",
 ];
 
 export function checkCombinedWeight(d: Derived, c: Ctx): CheckResult | null {
@@ -96,14 +93,10 @@ export function checkCombinedWeight(d: Derived, c: Ctx): CheckResult | null {
   if (!c.detail) return result;
   result.steps = steps;
   const cautions = CAUTIONS.slice();
-  const t = rig.trailer!;
-  if (t.brakes === "none" && d.gtw !== undefined && d.gtw >= BRAKE_NOTE_LB)
-    cautions.push(
-      "This trailer has no brakes. Many places require them at this weight (for example 3,000 lb in California and Florida, 750 kg in the UK): check local law.",
-    );
+  cautions.push(...brakeCautions(d));
   result.cautions = cautions;
   const advice: string[] = [];
-  if (result.status === "over") advice.push(`Take ${fW(c, total - v.gcwr!)} off the rig: lighten the trailer or the vehicle.`);
+  if (result.status === "over") advice.push(`Take ${fW(c, total - v.gcwr!)} off the rig: lighten the trailer or the vehicle, or use a vehicle with a higher GCWR. Weight distribution does not raise it.`);
   if (result.status === "tight") advice.push("The rig is close to its GCWR: weigh it whole at a public scale before a long or hilly trip.");
   for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
   result.advice = advice;

@@ -6,7 +6,7 @@
  *   s_min · G ≤ T ≤ s_max · G (the tongue-weight band).
  * Physics: the region is the intersection of half-planes; its corners are found in closed form.
  */
-import { EPS, fW, iN, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, rankOf, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
+import { EPS, fP, fW, iL, iN, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, rankOf, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
 import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
 import { need } from "../missing";
 import type { CheckStatus, EnvelopeLine, EnvelopeResult, MissingField, Step } from "../types";
@@ -137,6 +137,9 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
 
   const statuses: CheckStatus[] = [];
   let exceeded: Array<[Bound, number]> = [];
+  // The largest trailer at the trailer's own share (or the middle of the band), for the sentences: at the lowest
+  // share the tongue limit allows the most, but that is the edge where sway starts.
+  let atShare: { share: number; g: number; own: boolean } | undefined;
   if (gBound && tBound) {
     // Largest G: the GTW limit, or where the lowest share meets the TW limit.
     const gx = Math.max(0, Math.min(gMax, tMax / lo));
@@ -153,6 +156,7 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
       if (lessThan(g, gAt)) (gAt = g), (bind = b);
     }
     if (bind) result.binding = { id: bind.id, label: bind.label, value: bind.value * wf, unit: c.u.weight };
+    if (Number.isFinite(gAt)) atShare = { share, g: Math.max(0, gAt), own: d.gtw !== undefined && d.tw !== undefined && d.gtw > 0 && d.tw > 0 };
     if (c.detail && gx > EPS) {
       const g1 = Math.min(tMax / hi, gx);
       const pts: Array<[number, number]> = [[0, 0], [g1, hi * g1], [gx, Math.min(hi * gx, tMax)], [gx, lo * gx]];
@@ -236,12 +240,16 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
   result.cautions = [
     "The envelope holds for the vehicle loaded as entered: more people or cargo shrink it.",
     "A trailer inside the envelope still needs its tongue weight inside the band and its own ratings respected.",
+    "The largest trailer is stated at the tongue share named: loaded lighter on the tongue the limits allow more, but that is where sway starts.",
   ];
   const note = tongueWeightNote(d, c);
   if (note) result.cautions.push(note);
   if (d.wdUsed && rMeasured === undefined) result.cautions.push("The restoration is not measured yet: the rear axle is taken with the bars released, so the envelope may be larger once the fender heights are measured.");
   const advice: string[] = [];
-  if (result.status === "over") advice.push(`Choose a trailer no heavier than ${fW(c, result.maxGrossTrailerWeight?.value !== undefined ? result.maxGrossTrailerWeight.value / wf : 0)} loaded, with a tongue weight no more than ${fW(c, (result.maxTongueWeight?.value ?? 0) / wf)}.`);
+  if (result.status === "over" && atShare)
+    advice.push(
+      `Choose a trailer no heavier than ${fW(c, atShare.g)} loaded at a ${fP(atShare.share)} tongue share (${fW(c, atShare.g * atShare.share)} on the tongue), or take weight out, keeping the tongue share inside its band.`,
+    );
   for (const m of result.missing ?? []) advice.push(`${m.what}: ${m.where}.`);
   result.advice = advice;
   const over = exceeded.length
@@ -256,8 +264,8 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
   result.message =
     result.status === "over" && over
       ? `This trailer is more than the rig allows: ${over}.`
-      : result.maxGrossTrailerWeight && result.maxTongueWeight
-      ? `As loaded, this rig allows a trailer up to ${fW(c, result.maxGrossTrailerWeight.value / wf)} with up to ${fW(c, result.maxTongueWeight.value / wf)} on the tongue` +
+      : result.maxGrossTrailerWeight && result.maxTongueWeight && atShare
+      ? `As loaded, at ${atShare.own ? "this trailer's" : "a mid-band"} ${fP(atShare.share)} tongue share, this rig allows a trailer up to ${fW(c, atShare.g)} with ${fW(c, atShare.g * atShare.share)} on the tongue` +
         (result.binding ? `; first to bind: ${result.binding.label.toLowerCase()}.` : ".") +
         (result.status === "incomplete" ? " Some limits are not known yet, so it may be less." : "")
       : "Enter the vehicle's and the hitch's ratings to see how heavy a trailer this rig can take.";

@@ -5,6 +5,7 @@
  */
 import { fP, fW, govW, iW, marginW, NO_STEPS, NO_TEXT, qW, rW, statusOf, withMissing, type Ctx } from "../context";
 import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
+import { TAKE_WEIGHT_OUT } from "../advice";
 import { need } from "../missing";
 import type { CheckResult, MissingField, Step } from "../types";
 
@@ -162,7 +163,10 @@ export function checkPayload(d: Derived, c: Ctx): CheckResult {
     cautions.push("The hitch hardware's weight was not entered and is counted as zero; a ball mount or weight-distribution head can weigh a good deal.");
   result.cautions = cautions;
   const advice: string[] = [];
-  if (result.status === "over") advice.push(`Take ${fW(c, actual! - limit!)} or more out of the vehicle, or lighten what rides on the hitch.`);
+  if (result.status === "over")
+    advice.push(
+      `Take ${fW(c, actual! - limit!)} or more out of the vehicle, or ${d.hasAccessory ? "carry less on the rack or carrier" : `${TAKE_WEIGHT_OUT}; weight distribution adds no payload`}.`,
+    );
   if (result.status === "tight") advice.push("Little payload is left: weigh the loaded vehicle at a public scale before the trip.");
   for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
   result.advice = advice;

@@ -5,6 +5,7 @@
 import { EPS, fP, fW, NO_STEPS, NO_TEXT, qW, type Ctx } from "../context";
 import { tongueWeightNote, type Derived } from "../derive";
 import { tongueWeightByBeam, tongueWeightByPublicScale, tongueWeightByScale } from "../measure";
+import { CHOCK_CAUTION } from "../advice";
 import { need } from "../missing";
 import type { TongueMeasureResult } from "../types";
 import { lengthOut, weightOut } from "../units";
@@ -67,6 +68,7 @@ export function checkTongueMeasure(d: Derived, c: Ctx): TongueMeasureResult | nu
       units: u,
     });
     if (r.ok) result.steps = r.steps;
+    cautions.unshift(CHOCK_CAUTION);
   } else if (result.method === "scale" && m) {
     const r = tongueWeightByScale({ scaleReading: weightOut(m.scaleReading, c.u), units: u });
     if (r.ok) {
@@ -89,6 +91,7 @@ export function checkTongueMeasure(d: Derived, c: Ctx): TongueMeasureResult | nu
   if (d.twMeasureMissing.length)
     advice.push("Measure both beam distances (block to jack, and jack to scale): with only one, the reading is not the tongue weight.");
   else if (result.status === "incomplete") advice.push(HOW_TO);
+  if (result.status === "incomplete") cautions.unshift(CHOCK_CAUTION);
   const note = tongueWeightNote(d, c);
   if (note) cautions.push(note);
   result.advice = advice;

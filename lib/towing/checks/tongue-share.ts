@@ -88,7 +88,7 @@ export function checkTongueShare(d: Derived, c: Ctx): TongueShareResult | null {
   const bandText = `${fP(band.min)} to ${fP(band.max)}`;
   const advice: string[] = [];
   if (low) advice.push("Move load forward in the trailer, ahead of its axle, until the tongue carries more; then weigh again.");
-  if (high) advice.push("Move load back towards the trailer's axle, or carry less ahead of it; then weigh again.");
+  if (high) advice.push("Move load back towards the trailer's axle, or carry less ahead of it, until the share is inside the band; then weigh again.");
   if (result.status === "tight") advice.push("The share is near the edge of the band: load the trailer the same way every trip and weigh it.");
   for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
   result.advice = advice;
@@ -96,7 +96,7 @@ export function checkTongueShare(d: Derived, c: Ctx): TongueShareResult | null {
     result.message = low
       ? `The tongue carries ${fP(result.share)} of the trailer, below the ${bandText} band: a sway risk.`
       : high
-        ? `The tongue carries ${fP(result.share)} of the trailer, above the ${bandText} band: the rear axle is overloaded and the steering goes light.`
+        ? `The tongue carries ${fP(result.share)} of the trailer, above the ${bandText} band: it risks overloading the rear axle and lightening the steering; check the axle loads.`
         : `The tongue carries ${fP(result.share)} of the trailer, inside the ${bandText} band.`;
   } else if (result.estimatedTongueWeight && gtw !== undefined) {
     result.message = `Not weighed yet: a tongue weight of about ${fW(c, gtw * band.min)} to ${fW(c, gtw * band.max)} would fit the ${bandText} band.`;

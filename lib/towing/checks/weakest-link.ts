@@ -19,6 +19,7 @@ import {
   type Ctx,
 } from "../context";
 import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
+import { HITCHING_CAUTIONS, overLinkAdvice } from "../advice";
 import { need } from "../missing";
 import type { CheckStatus, Governing, Link, MissingField, Step, WeakestLinkResult } from "../types";
 
@@ -166,6 +167,7 @@ const CAUTIONS = [
   "Every part between the vehicle and the trailer has its own rating; the lowest one is the limit for the whole rig.",
   "Read the figures from the labels and stamps on the parts themselves; a catalogue figure may differ.",
   "Use two safety chains crossed under the tongue, hooked to the hitch, never to the ball or a removable ball mount.",
+  ...HITCHING_CAUTIONS,
 ];
 
 export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
@@ -247,10 +249,7 @@ export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
     advice.push(`Fit a ${t.couplerBallSize} in ball to match the coupler; the ${t.ballSize} in ball does not fit it safely.`);
   }
   for (const l of links) {
-    if (l.status === "over")
-      advice.push(
-        `${l.label} is exceeded: lighten the trailer or fit a part rated for at least ${fW(c, (l.limits === "tongue-weight" ? d.tw : d.gtw) ?? 0)}.`,
-      );
+    if (l.status === "over") advice.push(overLinkAdvice(c, l.id, l.label, l.limits, (l.limits === "tongue-weight" ? d.tw : d.gtw) ?? 0));
   }
   if (status === "tight") advice.push("Little room is left: weigh the loaded trailer before each trip and load no more.");
   for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
@@ -261,7 +260,7 @@ export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
   const cls = d.rig.hitch?.class;
   const classMax = cls !== undefined ? CLASS_MAX_GTW[cls] : undefined;
   if (classMax !== undefined && d.gtw !== undefined && d.gtw > classMax)
-    cautions.push(`A class ${cls} hitch covers trailers up to ${fW(c, classMax)} (SAE J684); this trailer is heavier. The hitch label governs.`);
+    cautions.push(`The class only sets a ceiling: class ${cls} goes up to ${fW(c, classMax)} (SAE J684), and this trailer is heavier. The hitch's own label gives its rating.`);
   result.advice = advice;
   result.cautions = cautions;
 

@@ -7,6 +7,7 @@
  */
 import { EPS, fL, govW, marginW, ratioOf, fP, fW, iL, iN, iW, lessOrEqual, lessThan, NO_STEPS, NO_TEXT, qL, qP, qW, rL, rN, rW, statusOf, type Ctx } from "../context";
 import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
+import { SPRING_BAR_CAUTION, WD_DOES_NOT_CHANGE, wdAdvice, wdRatingsState } from "../advice";
 import { need } from "../missing";
 import type { AxleLoads, CheckStatus, MissingField, Step, WeightDistributionResult } from "../types";
 
@@ -93,7 +94,8 @@ function consider(acc: NeedAcc, c: Ctx, list: Array<[string, string, number]>, a
 
 const CAUTIONS = [
   "Weigh the tongue and read the ball's rating with weight distribution released.",
-  "Measure fender heights at the same point above the front wheel centre, on level ground, each time.",
+  "Measure each front fender height from the ground to the lip of the front wheel opening, straight above the wheel centre, on level ground, with the trailer chocked.",
+  SPRING_BAR_CAUTION,
   "Restoring more than all of the front axle's lost load puts too much on the front and takes it off the rear wheels.",
   "Some vehicles ask for another target (for example a truck with air suspension): follow the vehicle maker's instructions.",
 ];
@@ -197,7 +199,7 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
       steps.push({
         id: "wd-front",
         title: "Front axle with weight distribution",
-        formulaWords: "Unhitched front load, minus the load the tongue lifts off, plus the share given back",
+        formulaWords: "Unhitched front load, minus the load the tongue takes off it, plus the share given back",
         formula: "F_0 - (1 - R) * TW * OH / WB",
         inputs: [iW(c, "F_0", "Front axle unhitched", aw.front), iN("R", "Restoration", s.restorationUsed, ""), iW(c, "TW", "Tongue weight", tw), iL(c, "OH", "Rear axle to ball", d.overhang), iL(c, "WB", "Wheelbase", v.wheelbase)],
         result: rW(c, "F_wd", w.front),
@@ -206,7 +208,7 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
       steps.push({
         id: "wd-rear",
         title: "Rear axle with weight distribution",
-        formulaWords: "Unhitched rear load plus the tongue weight plus the lifted load, less the share given back to the front",
+        formulaWords: "Unhitched rear load plus the tongue weight plus the load taken off the front, less the share given back to it",
         formula: "R_0 + TW + (1 - R) * TW * OH / WB",
         inputs: [iW(c, "R_0", "Rear axle unhitched", aw.rear), iN("R", "Restoration", s.restorationUsed, ""), iW(c, "TW", "Tongue weight", tw), iL(c, "OH", "Rear axle to ball", d.overhang), iL(c, "WB", "Wheelbase", v.wheelbase)],
         result: rW(c, "R_wd", w.rear),
@@ -259,11 +261,12 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
   result.cautions = cautions;
   const advice: string[] = [];
   if (!d.wdUsed) {
-    if (required) advice.push("Fit weight distribution rated for this tongue weight, or tow a lighter trailer: the weight-carrying limits are exceeded.");
-    else if (result.advisable) advice.push("Weight distribution is worth fitting: the weight-carrying limits are nearly reached.");
+    if (required) advice.push(...wdAdvice(d, "This trailer"));
+    else if (result.advisable && wdRatingsState(d) !== "exceeded")
+      advice.push(`Weight distribution is worth fitting, if its ratings cover this trailer: the weight-carrying limits are nearly reached. ${WD_DOES_NOT_CHANGE}`);
   } else if (s.restoration !== undefined) {
-    if (s.restoration > 1 + EPS) advice.push(`Ease the spring bars: the front fender should come to about ${fL(c, s.targetFenderHeight!)}.`);
-    else if (s.restoration < s.target * (1 - EPS)) advice.push(`Tighten the spring bars until the front fender comes down to about ${fL(c, s.targetFenderHeight!)}.`);
+    if (s.restoration > 1 + EPS) advice.push(`Too much is given back: adjust the spring bars as the weight-distribution maker's instructions say until the front fender comes up to about ${fL(c, s.targetFenderHeight!)}.`);
+    else if (s.restoration < s.target * (1 - EPS)) advice.push(`Adjust the spring bars as the weight-distribution maker's instructions say until the front fender comes down to about ${fL(c, s.targetFenderHeight!)}.`);
   } else if (s.readingsWrong) {
     advice.push(
       s.readingsWrong === "hitched-not-higher"
@@ -271,14 +274,16 @@ export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionR
         : "Check the fender readings: with the bars engaged the front fender should sit no higher than hitched with them released. Measure again at the same point, on level ground.",
     );
   } else if (s.targetFenderHeight !== undefined) {
-    advice.push(`Adjust the weight distribution until the front fender sits at about ${fL(c, s.targetFenderHeight)}, then enter that height.`);
+    advice.push(`Adjust the weight distribution as its maker's instructions say until the front fender sits at about ${fL(c, s.targetFenderHeight)}, then enter that height.`);
   }
   if (oversized && status === "tight") advice.push("Consider spring bars rated nearer the tongue weight.");
   for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
   result.advice = advice;
   if (!d.wdUsed)
     result.message = required
-      ? "Weight distribution is needed: without it this trailer is over the weight-carrying limits."
+      ? wdRatingsState(d) === "exceeded"
+        ? "This trailer is over the weight-carrying limits, and over the ratings that apply with weight distribution too."
+        : "Weight distribution is needed: without it this trailer is over the weight-carrying limits."
       : result.advisable
         ? "Weight distribution is advisable: the trailer is close to the weight-carrying limits."
         : status === "incomplete"

@@ -48,11 +48,11 @@ describe("accessory fit", () => {
     expect(part(af(rackRig({ accessory: { foldClearance: 6 }, extender: { length: 4 } })), "fold").limit?.value).toBe(9.5);
   });
 
-  it("advises a raised shank for a receiver 12 in from the ground", () => {
+  it("advises more shank rise for a receiver 12 in from the ground", () => {
     const res = af(rackRig({ hitch: { receiverHeight: 12 } }));
-    // Common practice, no published source: a receiver about 12 in from the ground calls for a raised shank
-    expect(res.advice.some((a) => a.includes("raised shank"))).toBe(true);
-    expect(af(rackRig({ hitch: { receiverHeight: 20 } })).advice.some((a) => a.includes("raised shank"))).toBe(false);
+    // Common practice, no published source: a receiver about 12 in from the ground calls for more shank rise
+    expect(res.advice.some((a) => a.includes("more shank rise keeps the accessory clear"))).toBe(true);
+    expect(af(rackRig({ hitch: { receiverHeight: 20 } })).advice.some((a) => a.includes("more shank rise keeps the accessory clear"))).toBe(false);
   });
 
   it("compares the load itself with the ratings, and its moment only as a caution", () => {

@@ -28,7 +28,7 @@ describe("ball mount", () => {
     // Common practice, no published source: within about 1 in of level; the 6 in drop is exactly 1 in off, no room left
     expect(res.status).toBe("tight");
     // A tight fit says how far off it rides and which drop would level it, rather than reading as fine.
-    expect(res.message).toContain("1 in off level, at the edge of the 1 in allowed; a 5 in drop would level it");
+    expect(res.message).toContain("1 in off level, nose-down, at the edge of the 1 in allowed; a 5 in drop would level it");
     expect(res.advice[0]).toBe("Use a ball mount with a 5 in drop (nearest common size).");
   });
 
