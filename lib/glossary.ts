@@ -385,7 +385,7 @@ export const SYMBOLS: Record<string, SymbolEntry> = {
   // Rack or carrier
   d: { meaning: "pin hole to the centre of the rack's load", term: "accessory" },
   d_ref: { meaning: "reference arm: the distance behind the pin a tongue rating is taken to apply at (common practice, no published source)", term: "accessory" },
-  k: { meaning: "a multiplier: the lever effect of the rack's distance, or the beam's lever ratio", term: "accessory" },
+  k: { meaning: "a multiplier: the lever effect of a rack's distance behind the pin, or a beam's lever ratio when weighing a tongue" },
   P_f: { meaning: "pin hole to the fascia", term: "fascia" },
   C_fold: { meaning: "clearance the folded rack needs", term: "fascia" },
   M_fold: { meaning: "room left when folded", term: "fascia" },

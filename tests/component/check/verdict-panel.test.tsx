@@ -74,7 +74,7 @@ describe("VerdictPanel", () => {
     const weakest = screen.getByTestId("check-weakest-link");
     const heading = within(weakest).getByText("What to do");
     const list = heading.parentElement!.querySelector("ul")!;
-    expect(list.textContent).toMatch(/Hitch rating is exceeded: lighten the trailer or fit a part rated for at least 3,900 lb/);
+    expect(list.textContent).toMatch(/Hitch rating is exceeded: fit a part rated for at least 3,900 lb, provided the vehicle.s own ratings allow it, or lighten the trailer/);
     // A check within its limits shows no advice box.
     const within_ = result.checks.find((c) => c.status === "within")!;
     expect(within(screen.getByTestId(`check-${within_.id}`)).queryByText("What to do")).toBeNull();
