@@ -248,7 +248,7 @@ export const TERMS = [
     term: "Overhang (rear axle to pin hole, and on to the ball)",
     names: ["overhang", "rear axle to pin hole", "rear axle to pin", "rear axle to ball"],
     definition:
-      "How far behind the rear axle centre the load acts. What is measured is the rear axle centre to the receiver pin hole, along the ground; for a trailer the ball mount's length and any extender are added to reach the ball, for a rack or carrier the load's own distance from the pin hole.",
+      "How far behind the rear axle centre the load acts. Measured: rear axle centre to the receiver pin hole, along the ground; the ball mount's length and any extender reach the ball, or a rack's load sits its own distance on.",
   },
   {
     id: "axle-load",
@@ -339,12 +339,15 @@ export const SYMBOLS: Record<string, SymbolEntry> = {
   M_TW: { meaning: "room left on the tongue weight", term: "weakest-link" },
   M_GCW: { meaning: "room left under the GCWR", term: "gcwr" },
   M_T: { meaning: "room left on the tongue capacity", term: "tongue-weight-limit" },
+  T_vh: { meaning: "the lowest tongue rating of the vehicle and the hitch (extender aside)", term: "tongue-weight-limit" },
+  M_lever: { meaning: "room left for the lever effect: that rating minus the equivalent load", term: "accessory" },
   L_wc: { meaning: "the closest weight-carrying limit", term: "weight-carrying" },
   M_wc: { meaning: "room left on the closest weight-carrying limit", term: "weight-carrying" },
   // The envelope
   G_gcwr: { meaning: "the trailer weight the GCWR leaves", term: "envelope" },
   T_payload: { meaning: "the tongue weight the payload left allows", term: "envelope" },
   T_axle: { meaning: "the tongue weight the rear GAWR allows", term: "envelope" },
+  k_R: { meaning: "rear axle load gained per unit of tongue weight", term: "axle-load" },
   G_lim: { meaning: "the lowest limit on the trailer's weight", term: "envelope" },
   T_lim: { meaning: "the lowest limit on the tongue weight", term: "envelope" },
   G_max: { meaning: "the heaviest trailer the envelope allows", term: "envelope" },
@@ -362,6 +365,7 @@ export const SYMBOLS: Record<string, SymbolEntry> = {
   R_w: { meaning: "rear axle as weighed", term: "axle-load" },
   F_h: { meaning: "front axle load, hitched", term: "axle-load" },
   R_h: { meaning: "rear axle load, hitched", term: "axle-load" },
+  R_max: { meaning: "rear axle load with the weight distribution released, the heaviest it can be until the fender heights are measured", term: "weight-distribution" },
   F_u: { meaning: "front axle load, unhitched, as weighed", term: "axle-load" },
   R_u: { meaning: "rear axle load, unhitched, as weighed", term: "axle-load" },
   F_wd: { meaning: "front axle load with weight distribution set", term: "weight-distribution" },

@@ -217,7 +217,7 @@ export const LIBRARY: readonly LibraryExample[] = [
     slug: "how-heavy-a-trailer",
     title: "How heavy a trailer to shop for",
     story:
-      "The Marrowby brothers want a car hauler for their pickup and ask how heavy a trailer it can pull as they drive it. The brochure says it tows 8,000 lb with 800 lb on the tongue; the door label gives a 7,000 lb GVWR and the manual a 13,500 lb GCWR. Loaded with the two of them, their tools and the ball mount, the truck weighed 3,350 lb front and 2,600 lb rear (rear GAWR 4,000 lb); the wheelbase is 145 in and the ball sits 48 in behind the rear axle. The hitch's label reads 10,000 lb and 1,000 lb.",
+      "The Marrowby brothers want a car hauler for their pickup and ask how heavy a trailer it can pull as they drive it. The brochure says it tows 8,000 lb with 800 lb on the tongue; the door label gives a 7,000 lb GVWR and the manual a 13,500 lb GCWR. Loaded with the two of them, their tools and the ball mount, the truck weighed 3,350 lb front and 2,600 lb rear (rear GAWR 4,000 lb); the wheelbase is 145 in, the receiver's pin hole sits 38 in behind the rear axle and the ball mount reaches 10 in further, so the ball sits 48 in behind it. The hitch's label reads 10,000 lb and 1,000 lb.",
     question: "How much trailer weight does the GCWR leave, and how heavy a trailer does the 800 lb tongue limit allow at a typical 12.5 % tongue share?",
     checkId: "envelope",
     rule: "Every limit counts at once: each gross-trailer-weight rating, the GCWR less the loaded vehicle, and for the tongue each rating, the payload left and the rear axle's room. Work the tongue limit at the trailer's own share: 800 lb at 12.5 % allows 6,400 lb, not the 8,000 lb on the brochure. Above about 5,000 lb most makers also require weight distribution, which raises none of these limits.",
@@ -225,8 +225,11 @@ export const LIBRARY: readonly LibraryExample[] = [
     rig: {
       units: "imperial",
       name: "The Marrowbys' pickup, loaded, before choosing a trailer (invented)",
-      vehicle: { towRating: 8000, tongueWeightLimit: 800, gvwr: 7000, gcwr: 13500, gawrFront: 3700, gawrRear: 4000, axleWeights: { front: 3350, rear: 2600 }, wheelbase: 145, rearAxleToHitch: 48 },
+      vehicle: { towRating: 8000, tongueWeightLimit: 800, gvwr: 7000, gcwr: 13500, gawrFront: 3700, gawrRear: 4000, axleWeights: { front: 3350, rear: 2600 }, wheelbase: 145, rearAxleToPin: 38 },
       hitch: { class: 4, receiverSize: "2", gtwRating: 10000, twRating: 1000 },
+      // 38 in to the pin hole + a 10 in ball mount = the ball 48 in behind the rear axle; the car hauler is not chosen yet
+      ballMount: { length: 10 },
+      trailer: { type: "car-hauler" },
     },
   },
 ];

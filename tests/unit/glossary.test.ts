@@ -34,7 +34,7 @@ function corpus(): RigInput[] {
     pickupRig({ vehicle: { wdRequiredAbove: 3000 } }),
     rig({
       units: "metric",
-      vehicle: { tongueWeightLimit: 100, gvwr: 2200, curbWeight: 1600, rearAxleToHitch: 900, departureAngle: 20, axleWeights: { front: 900, rear: 800 }, wheelbase: 2700, gawrFront: 1100, gawrRear: 1200 },
+      vehicle: { tongueWeightLimit: 100, gvwr: 2200, curbWeight: 1600, rearAxleToPin: 900, departureAngle: 20, axleWeights: { front: 900, rear: 800 }, wheelbase: 2700, gawrFront: 1100, gawrRear: 1200 },
       hitch: { twRating: 90, receiverHeight: 450, pinToFascia: 120 },
       extender: { length: 150, twRating: 70 },
       accessory: { type: "platform-rack", weight: 20, loadWeight: 30, loadCenterFromPin: 400, foldClearance: 200, lowestPointBelowShankTop: 80, lowestPointBehindPin: 300, shankRise: 50 },

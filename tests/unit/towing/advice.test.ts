@@ -210,7 +210,7 @@ describe("words that read wrong", () => {
     expect(texts(axles)).not.toMatch(/lifted|lifts the front/);
     const low = rig({
       units: "imperial",
-      vehicle: { tongueWeightLimit: 200, rearAxleToHitch: 22, departureAngle: 21 },
+      vehicle: { tongueWeightLimit: 200, rearAxleToPin: 22, departureAngle: 21 },
       hitch: { twRating: 200, receiverHeight: 11, pinToFascia: 6 },
       accessory: { type: "cargo-carrier", weight: 40, loadWeight: 60, loadCenterFromPin: 12, lowestPointBelowShankTop: 3, lowestPointBehindPin: 8 },
     });

@@ -179,10 +179,11 @@ describe("a set-up to adjust reads apart from a rating exceeded", () => {
   it("a ball mount off level asks to adjust the set-up, not to stop towing for a rating", () => {
     const r = evaluateRig(pickupRig({ ballMount: { drop: 2 } }));
     // Source: boating publication how-to: 26 − 20 = 6 in needed, 2 in fitted
+    // Statics: the 2 in drop is 4 in less than the 6 in needed, so the ball sits high and the trailer rides nose-up
     expect(r.verdict.level).toBe("adjust");
     expect(r.verdict.adjust).toEqual(["ball-mount"]);
     expect(r.verdict.over).toEqual([]);
-    expect(r.verdict.message).toBe("Adjust the set-up before towing: the ball mount's 2 in drop leaves the trailer 4 in off level; a 6 in drop is needed.");
+    expect(r.verdict.message).toBe("Adjust the set-up before towing: the ball mount's 2 in drop leaves the trailer 4 in off level, nose-up; a 6 in drop is needed.");
     expect(r.verdict.actions[0]?.status).toBe("adjust");
   });
 
