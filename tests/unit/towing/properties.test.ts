@@ -22,7 +22,7 @@ import {
 } from "@/lib/towing";
 
 /** Runs per property; raise it with TOWING_PROPERTY_RUNS for a deeper search. */
-const RUNS = Number(process.env.TOWING_PROPERTY_RUNS ?? 250);
+const RUNS = Number(process.env.PROPERTY_RUNS ?? 0) || Number(process.env.TOWING_PROPERTY_RUNS ?? 250);
 
 /** A number in the field's valid (imperial) range, whole numbers often so that limits are hit exactly. */
 function num(path: string) {

@@ -31,6 +31,17 @@ describe("weight distribution", () => {
     expect(res.status).toBe("within");
   });
 
+  it("reads just short of the target as tight, with its room measured to the close edge so badge and figures agree", () => {
+    // Source: Ram owner's manuals, citing SAE J2807: restoration = (H2 − H3) ÷ (H2 − H1) = (1058 − 1044.84) ÷ 28 = 47 %.
+    // Common practice, no published source: within the organisation's tight share (10 %) of the 50 % target, i.e.
+    // down to 45 %, reads tight; the room is 47 − 45 = 2 percentage points.
+    const res = metricWd(1044.84);
+    expect(res.restoration).toBeCloseTo(0.47, 6);
+    expect(res.status).toBe("tight");
+    expect(res.limit?.value).toBeCloseTo(45, 6);
+    expect(res.margin?.value).toBeCloseTo(2, 6);
+  });
+
   it("follows a maker's other target", () => {
     const res = metricWd(undefined, 100 / 3);
     // Source: Ram owner's manuals (one maker's air-suspension truck uses one third): 1030 + 28 × 2/3 = 1048.67 mm
