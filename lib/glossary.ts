@@ -489,6 +489,10 @@ export const CHECK_WORDS: Record<CheckId, CheckWords> = {
     title: "How heavy a trailer fits",
     line: "The heaviest trailer, and the most weight on its tongue, this vehicle could take as it is loaded today.",
   },
+  "local-rules": {
+    title: "The rules where you drive",
+    line: "What the law where the rig is driven asks of it (brakes, licence, coupling), each rule with its source.",
+  },
 };
 
 /** The plain title of a check, for lists such as "these checks still lack figures". */

@@ -28,7 +28,7 @@ export interface ProfileField {
   label: string;
   type: FieldType;
   /** "mass", "length", "angle", "percent" for numbers (their unit follows the file's or profile's units). */
-  measure?: "mass" | "length" | "angle" | "percent";
+  measure?: "mass" | "length" | "angle" | "percent" | "force";
   choices?: readonly string[];
   /** Where the figure is found or how it is measured (forms show it as help). */
   help?: string;

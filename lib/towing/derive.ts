@@ -41,7 +41,7 @@ export interface Derived {
   twMeasureMissing: string[];
   /** Fields that would give a tongue weight: the measurement's missing distance, else the tongue weight. */
   twNeed: string[];
-  band: { min: number; max: number; source: "vehicle" | "trailer-type" };
+  band: { min: number; max: number; source: "vehicle" | "trailer-type" | "place" };
   /** Vertical load on the hitch: the tongue weight, or accessory + its load. */
   hitchLoad?: number;
   hitchLoadEstimated: boolean;

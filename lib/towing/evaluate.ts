@@ -19,9 +19,13 @@ import { buildVerdict, GENERAL_CAUTIONS } from "./checks/verdict";
 import { checkWeakestLink } from "./checks/weakest-link";
 import { checkWeightDistribution } from "./checks/weight-distribution";
 import type { AnyCheckResult, CheckId, EvaluateOptions, FastCheck, FastRigResult, RigResult, RigSummary } from "./types";
+import type { LocalRulesResult } from "./rules/types";
 import { CHECK_IDS } from "./types";
 import { lengthIn, unitSet } from "./units";
 import { CORE_VERSION } from "./version";
+import { checkLocalRules, type RulesContext } from "./rules/check";
+import { localiseDeep } from "./rules/glossary";
+import { ruleSetFor } from "./rules/places";
 import type { Derived } from "./derive";
 
 /** Default tight threshold: 10 % of the limit. */
@@ -57,8 +61,22 @@ function context(rig: RigInput, options: EvaluateOptions | undefined, detail: bo
   };
 }
 
-function run(rig: RigInput, c: Ctx) {
+/** The place's rule set, when a known place is given. */
+function rulesOf(options: EvaluateOptions | undefined): RulesContext | undefined {
+  const place = options?.place;
+  if (!place) return undefined;
+  const set = ruleSetFor(place);
+  return set ? { set, place } : undefined;
+}
+
+function run(rig: RigInput, c: Ctx, rules?: RulesContext) {
   const d = derive(toCanonical(rig));
+  // A place's noseweight band (caravans: 5–7 %) replaces the trailer type's band; the vehicle maker's still wins.
+  if (rules && d.band.source === "trailer-type" && d.hasTrailer) {
+    const type = d.rig.trailer!.type;
+    for (const row of rules.set.rules)
+      if (row.test === "noseweight-band" && (!row.trailerTypes || row.trailerTypes.includes(type))) d.band = { ...row.band, source: "place" };
+  }
   const checks: AnyCheckResult[] = [];
   const summary: FastCheck[] = [];
   const notApplicable: CheckId[] = [];
@@ -70,6 +88,11 @@ function run(rig: RigInput, c: Ctx) {
       summary.push({ id: r.id, status: r.status, margin: r.margin, governing: r.governing });
     } else notApplicable.push(id);
   }
+  if (rules) {
+    const r = checkLocalRules(d, c, rules);
+    checks.push(r);
+    summary.push({ id: r.id, status: r.status, margin: r.margin, governing: r.governing });
+  }
   return { checks, summary, notApplicable, verdict: buildVerdict(summary, checks, c) };
 }
 
@@ -78,13 +101,19 @@ function run(rig: RigInput, c: Ctx) {
  * cautions and advice, and the verdict. Values come back in the rig's unit system.
  */
 export function evaluateRig(input: RigInput, options?: EvaluateOptions): RigResult {
-  const { checks, notApplicable, verdict } = run(input, context(input, options, true));
-  return { coreVersion: CORE_VERSION, units: input.units, checks, notApplicable, verdict };
+  const rules = rulesOf(options);
+  const { checks, notApplicable, verdict } = run(input, context(input, options, true), rules);
+  const result: RigResult = { coreVersion: CORE_VERSION, units: input.units, checks, notApplicable, verdict };
+  if (!rules) return result;
+  const local = checks[checks.length - 1] as LocalRulesResult;
+  result.rules = local.rules;
+  // One calculation, the place's words: every text of the result in the place's glossary.
+  return localiseDeep(result, rules.set.glossary);
 }
 
 /** Statuses, margins and governing items without steps or texts: for fleet matrices. */
 export function evaluateRigFast(input: RigInput, options?: EvaluateOptions): FastRigResult {
-  const { summary, verdict } = run(input, context(input, options, false));
+  const { summary, verdict } = run(input, context(input, options, false), rulesOf(options));
   return {
     coreVersion: CORE_VERSION,
     units: input.units,
@@ -104,8 +133,9 @@ export function evaluateRigFast(input: RigInput, options?: EvaluateOptions): Fas
  * with no worked steps, messages or advice. The same checks as evaluateRig, run without their texts.
  */
 export function evaluateRigSummary(input: RigInput, options?: EvaluateOptions): RigSummary {
-  const { checks, notApplicable, verdict } = run(input, context(input, options, false));
-  return {
+  const rules = rulesOf(options);
+  const { checks, notApplicable, verdict } = run(input, context(input, options, false), rules);
+  const summary: RigSummary = {
     coreVersion: CORE_VERSION,
     units: input.units,
     detail: "summary",
@@ -128,6 +158,8 @@ export function evaluateRigSummary(input: RigInput, options?: EvaluateOptions): 
       cautions: GENERAL_CAUTIONS,
     },
   };
+  // A place's words reach the compact answer too (its governing labels and cautions).
+  return rules ? localiseDeep(summary, rules.set.glossary) : summary;
 }
 
 export { CHECK_IDS };

@@ -13,6 +13,8 @@ export {
   RECEIVER_SIZES,
   BALL_SIZES,
   BRAKE_TYPES,
+  LICENCE_CATEGORIES,
+  type LicenceCategory,
   type RigInput,
   type VehicleInput,
   type TrailerInput,
@@ -22,7 +24,7 @@ export {
   type AccessoryType,
 } from "./input";
 export { convertRig } from "./convert-rig";
-export { parseEvaluateRequest, type EvaluateRequest, type EvaluateDetail } from "./request";
+export { parseEvaluateRequest, parsePlace, type EvaluateRequest, type EvaluateDetail } from "./request";
 export { tongueWeightByScale, tongueWeightByBeam, tongueWeightByPublicScale, DIRECT_SCALE_LIMIT_LB, type MeasureResult, type AxlePair } from "./measure";
 export { GENERAL_CAUTIONS } from "./checks/verdict";
 export { TONGUE_BANDS } from "./derive";
@@ -36,3 +38,4 @@ export {
   type AllowanceLimit,
   type AllowanceRating,
 } from "./hitch-allowance";
+export * from "./rules";

@@ -28,8 +28,15 @@ export const RECEIVER_SIZES = ["1-1/4", "2", "2-1/2", "3"] as const;
 /** Nominal hitch-ball diameters, in inches as stamped. */
 export const BALL_SIZES = ["1-7/8", "2", "2-5/16", "3"] as const;
 export const BRAKE_TYPES = ["none", "surge", "electric", "other"] as const;
+/**
+ * Driving-licence categories the local rules know (Great Britain and the EU): B (a car), B with code 96, BE.
+ * "other" is any other licence: the rules say "check the licence" for it.
+ */
+export const LICENCE_CATEGORIES = ["B", "B96", "BE", "other"] as const;
+export type LicenceCategory = (typeof LICENCE_CATEGORIES)[number];
 
-type Kind = "mass" | "length" | "angle" | "percent";
+/** "force" is a coupling's D value in kN, the same in both unit systems. */
+type Kind = "mass" | "length" | "angle" | "percent" | "force";
 
 interface Range {
   kind: Kind;
@@ -44,6 +51,7 @@ export const FIELD_RANGES: Record<string, Range & { label: string }> = {};
 function unitOf(kind: Kind, units: UnitSystem): string {
   if (kind === "mass") return units === "metric" ? "kg" : "lb";
   if (kind === "length") return units === "metric" ? "mm" : "in";
+  if (kind === "force") return "kN";
   return kind === "angle" ? "°" : "%";
 }
 
@@ -136,6 +144,8 @@ function rigShape<U extends UnitSystem>(units: U) {
         twRatingWd: m("hitch.twRatingWd", "Hitch tongue weight rating with weight distribution", 0, 6000),
         receiverHeight: l("hitch.receiverHeight", "Receiver height", 4, 40),
         pinToFascia: l("hitch.pinToFascia", "Pin hole to fascia", 0, 24),
+        dValue: field(units, "hitch.dValue", "Tow bar D value", "force", 0, 200),
+        sValue: m("hitch.sValue", "Tow ball S value (static vertical load)", 0, 6000),
       })
       .optional(),
     trailer: z
@@ -158,6 +168,10 @@ function rigShape<U extends UnitSystem>(units: U) {
         ballRating: m("trailer.ballRating", "Ball rating", 0, 40000),
         brakes: z.enum(BRAKE_TYPES, { error: "Brakes: choose one from the list." }).optional(),
         safetyChainRating: m("trailer.safetyChainRating", "Safety chain rating (each chain)", 0, 60000),
+        mam: m("trailer.mam", "Trailer's plated maximum mass", 50, 30000),
+        brakesAllWheels: z.boolean({ error: "Brakes on every wheel: yes or no." }).optional(),
+        breakaway: z.boolean({ error: "Breakaway device: yes or no." }).optional(),
+        couplingDValue: field(units, "trailer.couplingDValue", "Coupling head D value", "force", 0, 200),
       })
       .optional(),
     ballMount: z
@@ -191,6 +205,11 @@ function rigShape<U extends UnitSystem>(units: U) {
         occupants: m("load.occupants", "Occupants", 0, 5000),
         cargo: m("load.cargo", "Cargo in the vehicle", 0, 20000),
         hitchHardware: m("load.hitchHardware", "Hitch hardware", 0, 1000),
+      })
+      .optional(),
+    driver: z
+      .object({
+        licence: z.enum(LICENCE_CATEGORIES, { error: "Driving licence: choose one from the list." }).optional(),
       })
       .optional(),
     accessory: z

@@ -4,6 +4,7 @@
  */
 import { parseRig, type RigInput } from "./input";
 import type { EvaluateOptions } from "./types";
+import { placeSchema } from "./rules/places";
 
 /** "full" (the default): every check with its worked steps and texts. "summary": verdict and figures only. */
 export type EvaluateDetail = "full" | "summary";
@@ -29,7 +30,12 @@ export function parseEvaluateRequest(body: unknown): EvaluateRequest {
     if (rawOptions === null || typeof rawOptions !== "object" || Array.isArray(rawOptions)) {
       return { ok: false, fieldErrors: { options: ["Options must be an object."] } };
     }
-    const { tightMarginRatio, accessoryReferenceArm } = rawOptions as Record<string, unknown>;
+    const { tightMarginRatio, accessoryReferenceArm, place } = rawOptions as Record<string, unknown>;
+    if (place !== undefined) {
+      const parsed = parsePlace(place);
+      if (!parsed.ok) return { ok: false, fieldErrors: parsed.fieldErrors };
+      options.place = parsed.place;
+    }
     if (tightMarginRatio !== undefined) {
       if (typeof tightMarginRatio !== "number" || !Number.isFinite(tightMarginRatio) || tightMarginRatio < 0 || tightMarginRatio > 0.5) {
         return { ok: false, fieldErrors: { "options.tightMarginRatio": ["Enter a number from 0 to 0.5."] } };
@@ -45,4 +51,26 @@ export function parseEvaluateRequest(body: unknown): EvaluateRequest {
   }
   const parsed = parseRig(rawRig);
   return parsed.ok ? { ok: true, rig: parsed.rig, options, detail } : parsed;
+}
+
+/**
+ * A place as `{ country, region? }` or as a code "GB-ENG", "US-TX", "EU". Field-error keys start with
+ * "options.place".
+ */
+export function parsePlace(value: unknown): { ok: true; place: NonNullable<EvaluateOptions["place"]> } | { ok: false; fieldErrors: Record<string, string[]> } {
+  let candidate = value;
+  if (typeof value === "string") {
+    const [country, ...rest] = value.trim().toUpperCase().split("-");
+    candidate = rest.length ? { country, region: rest.join("-") } : { country };
+  }
+  if (candidate === null || typeof candidate !== "object" || Array.isArray(candidate))
+    return { ok: false, fieldErrors: { "options.place": ["Place: give a country, and a state or province where rules differ (for example GB-ENG, US-TX, EU)."] } };
+  const parsed = placeSchema.safeParse(candidate);
+  if (parsed.success) return { ok: true, place: parsed.data };
+  const fieldErrors: Record<string, string[]> = {};
+  for (const issue of parsed.error.issues) {
+    const key = ["options.place", ...issue.path.map(String)].join(".");
+    (fieldErrors[key] ??= []).push(issue.message);
+  }
+  return { ok: false, fieldErrors };
 }

@@ -1,5 +1,6 @@
 /** Result types of the core. Every number is unrounded, finite, and in the rig's own unit system. */
 import type { UnitString, UnitSystem } from "./units";
+import type { AppliedRules, LocalRulesResult, Place } from "./rules/types";
 
 /**
  * A check's status. `over`: a rating is exceeded (do not tow). `adjust`: the set-up needs changing before the
@@ -31,6 +32,7 @@ export const CHECK_IDS = [
   "ball-mount",
   "accessory-fit",
   "envelope",
+  "local-rules",
 ] as const;
 export type CheckId = (typeof CHECK_IDS)[number];
 
@@ -119,7 +121,8 @@ export interface WeakestLinkResult extends CheckResult {
 export interface TongueShareResult extends CheckResult {
   id: "tongue-share";
   share?: number;
-  band: { min: number; max: number; source: "vehicle" | "trailer-type" };
+  /** "place": the band of the place's rule set (a guideline, never over on its own). */
+  band: { min: number; max: number; source: "vehicle" | "trailer-type" | "place" };
   /** Tongue weight estimated from the band when it was not weighed. */
   estimatedTongueWeight?: { low: Quantity; high: Quantity };
 }
@@ -233,6 +236,7 @@ export type AnyCheckResult =
   | BallMountResult
   | AccessoryFitResult
   | EnvelopeResult
+  | LocalRulesResult
   | CheckResult;
 
 export interface RigResult {
@@ -243,6 +247,8 @@ export interface RigResult {
   /** Checks that do not apply (for instance ball-mount on a rig with a bike rack). */
   notApplicable: CheckId[];
   verdict: VerdictResult;
+  /** The place and the rule set (id and version) the "local-rules" check read, when a place was given. */
+  rules?: AppliedRules;
 }
 
 /** One check in the compact answer: figures only, no steps or texts. */
@@ -293,4 +299,9 @@ export interface EvaluateOptions {
    * Used to weigh an accessory's moment. Default 10 in (254 mm). Common practice, no published source.
    */
   accessoryReferenceArm?: number;
+  /**
+   * Where the rig is driven. With a place the rig is also read against that place's rule set (the
+   * "local-rules" check), the result records the set and its version, and texts use the place's words.
+   */
+  place?: Place;
 }

@@ -19,7 +19,7 @@ export type Dimension = "mass" | "length";
 export type WeightUnit = "lb" | "kg";
 export type LengthUnit = "in" | "mm";
 /** Unit strings that appear in results. */
-export type UnitString = WeightUnit | LengthUnit | "%" | "°" | "";
+export type UnitString = WeightUnit | LengthUnit | "%" | "°" | "kN" | "";
 
 export interface UnitSet {
   system: UnitSystem;

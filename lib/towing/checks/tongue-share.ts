@@ -46,6 +46,7 @@ export function checkTongueShare(d: Derived, c: Ctx): TongueShareResult | null {
     const edge = nearLow ? band.min : band.max;
     const ratio = nearLow ? lowM : highM;
     // Outside the band the load must move before the trailer tows: a set-up to adjust, not a rating exceeded.
+    // A place's band (a guideline) reads the same way: adjust, never over.
     const status: CheckStatus = low || high ? "adjust" : ratio < c.tight - EPS ? "tight" : "within";
     result.status = status;
     result.actual = qP(share);

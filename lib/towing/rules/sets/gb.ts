@@ -1,0 +1,117 @@
+/** Great Britain (England, Scotland and Wales). Metric; the trade's words are the UK's (glossary "gb"). */
+import type { RuleSet } from "../types";
+
+const GOV_UK_TOWING = { title: "gov.uk, Towing with a car", url: "https://www.gov.uk/towing-with-car", trust: "H" } as const;
+const CARAVAN_GUIDES = {
+  title: "The Caravan Club towing leaflet (2008); National Caravan Council towing guide",
+  trust: "M",
+  note: "Trade guidance, not law.",
+} as const;
+
+export const GB_RULES: RuleSet = {
+  id: "gb",
+  version: "2026.12.1",
+  title: "Great Britain (England, Scotland and Wales)",
+  glossary: "gb",
+  defaultUnits: "metric",
+  unitsInUse: ["metric"],
+  scope:
+    "Trailer brakes over 750 kg, the car licence since 16 December 2021, the gross train weight and the trailer's MAM, the coupling's D value and the tow ball's S value, and the caravan matching guidelines. Everything else is for local law.",
+  rules: [
+    {
+      id: "gb.brakes.over-750",
+      kind: "law",
+      topic: "brakes",
+      test: "brakes",
+      title: "Trailer brakes",
+      requires: "A trailer weighing over 750 kg, including its load, must have a working brake system.",
+      threshold: { value: 750, unit: "kg", applies: "above", of: "laden" },
+      source: { ...GOV_UK_TOWING, ref: "Trailer brakes" },
+    },
+    {
+      id: "gb.breakaway",
+      kind: "defer",
+      topic: "brakes",
+      test: "defer",
+      title: "Breakaway cable or secondary coupling",
+      requires: "How a braked trailer's breakaway cable, or an unbraked trailer's secondary coupling, must be fitted is for local law.",
+      threshold: { value: 750, unit: "kg", applies: "above", of: "laden" },
+      source: { ...GOV_UK_TOWING, trust: "L", note: "The product does not decide this rule." },
+    },
+    {
+      id: "gb.licence.car",
+      kind: "law",
+      topic: "licence",
+      test: "licence",
+      title: "Car licence (category B)",
+      requires:
+        "Since 16 December 2021 a car licence (category B) allows a car up to 3,500 kg MAM towing a trailer up to 3,500 kg MAM.",
+      categories: {
+        B: { unit: "kg", vehicleMax: 3500, trailerMax: 3500 },
+        B96: { unit: "kg", vehicleMax: 3500, trailerMax: 3500 },
+        BE: { unit: "kg", vehicleMax: 3500, trailerMax: 3500 },
+      },
+      source: { ...GOV_UK_TOWING, ref: "Licence rules; the DVLA notice of the December 2021 change" },
+    },
+    {
+      id: "gb.train-weight",
+      kind: "law",
+      topic: "weights",
+      test: "train-weight",
+      title: "Gross train weight",
+      requires: "The car and the loaded trailer together must not weigh more than the car's gross train weight.",
+      source: { ...GOV_UK_TOWING, ref: "Towing weight limits" },
+    },
+    {
+      id: "gb.trailer-mam",
+      kind: "law",
+      topic: "weights",
+      test: "trailer-plate",
+      title: "Trailer MAM",
+      requires: "The loaded trailer must not weigh more than its MAM.",
+      source: { ...GOV_UK_TOWING, ref: "Towing weight limits" },
+    },
+    {
+      id: "gb.coupling-d",
+      kind: "law",
+      topic: "coupling",
+      test: "coupling-d",
+      title: "Coupling D value",
+      requires: "The D value marked on the tow bar and on the coupling head must be at least D = g · T · R / (T + R).",
+      g: 9.81,
+      source: { title: "UN Regulation No. 55, mechanical coupling components", ref: "Definition of the D value", trust: "H" },
+    },
+    {
+      id: "gb.ball-s",
+      kind: "law",
+      topic: "coupling",
+      test: "ball-s",
+      title: "Tow ball S value",
+      requires: "The noseweight must not exceed the static vertical load (S value) marked on the tow ball.",
+      source: { title: "The S value marked on the tow bar or ball (UN Regulation No. 55 marking)", trust: "M" },
+    },
+    {
+      id: "gb.caravan-match",
+      kind: "guideline",
+      topic: "matching",
+      test: "caravan-match",
+      title: "Caravan to car match",
+      requires: "A caravan's laden weight should be at most 85 % of the car's kerb weight, and never over 100 %.",
+      trailerTypes: ["travel"],
+      advised: 0.85,
+      ceiling: 1,
+      source: CARAVAN_GUIDES,
+    },
+    {
+      id: "gb.noseweight-band",
+      kind: "guideline",
+      topic: "matching",
+      test: "noseweight-band",
+      title: "Caravan noseweight",
+      requires: "A caravan's noseweight should be 5 to 7 % of its actual laden weight.",
+      trailerTypes: ["travel"],
+      band: { min: 0.05, max: 0.07 },
+      source: CARAVAN_GUIDES,
+    },
+  ],
+};
