@@ -38,6 +38,9 @@ export const organisations = sqliteTable("organisations", {
   tightMarginRatio: real("tight_margin_ratio").notNull().default(0.1),
   /** How long a new customer link works unless the person making it chooses otherwise. */
   linkLifetimeDays: integer("link_lifetime_days").notNull().default(180),
+  /** Where the organisation works: a country code (lib/towing/rules/places.ts) and, where rules differ, a region. */
+  country: text("country"),
+  region: text("region"),
   createdAt: timestampNow(),
 });
 

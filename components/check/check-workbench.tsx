@@ -13,7 +13,11 @@ import { ChevronDown, CircleAlert, Save, UserRound } from "lucide-react";
 import { Button, Card, CardBody, CardHeader, Dialog, Field, FormMessage, Select, TextInput, Textarea, VerdictBadge, cn, levelWords } from "@/components/ui";
 import { evaluateRig, type RigInput, type RigResult, type UnitSystem, type AccessoryFitResult } from "@/lib/towing";
 import { rigInputSchema } from "@/lib/validation/rig";
-import { RigCard, UnitsProvider } from "./field-parts";
+import { RigCard, UnitsProvider, WordsProvider } from "./field-parts";
+import { PlacePicker, type PlaceChoice } from "./place-picker";
+import { AppliedRules, localRulesOf } from "@/components/rules/applied-rules";
+import { ruleSetFor } from "@/lib/towing/rules/places";
+import type { Place } from "@/lib/towing/rules/types";
 import {
   AccessoryFields,
   HitchedChoice,
@@ -60,7 +64,9 @@ export interface CheckWorkbenchProps {
     accessories: Array<{ id: string; name: string; rig: Pick<RigInput, "units" | "accessory" | "extender"> }>;
   };
   /** When given, a "Save check" area appears (customer name optional, note optional). Called with the parsed rig. */
-  onSave?: (input: { rig: RigInput; customerName?: string; note?: string }) => Promise<ActionResult & { checkId?: string }>;
+  onSave?: (input: { rig: RigInput; customerName?: string; note?: string; place?: Place | null }) => Promise<ActionResult & { checkId?: string }>;
+  /** Where the organisation works: the check is read against its rules unless staff choose another place. */
+  place?: Place;
   /** When given, a "Save vehicle as profile" button appears on the vehicle card (asks for a name in a Dialog). */
   onSaveVehicleProfile?: (input: { name: string; rig: Pick<RigInput, "units" | "vehicle" | "hitch" | "load"> }) => Promise<ActionResult>;
   /** Shown when signed out: a line saying nothing is saved and a link to sign in. */
@@ -89,6 +95,7 @@ interface LiveProps {
   control: Control<RigFormValues, unknown, RigInput>;
   kind: HitchedKind;
   tightMarginRatio?: number;
+  place: PlaceChoice;
   onJump: (path: string) => void;
 }
 
@@ -105,12 +112,12 @@ function withoutLevelWord(message: string): string {
   return rest.charAt(0).toUpperCase() + rest.slice(1);
 }
 
-function LiveVerdict({ control, kind, tightMarginRatio, onJump }: LiveProps) {
+function LiveVerdict({ control, kind, tightMarginRatio, place, onJump }: LiveProps) {
   const values = useWatch({ control }) as RigFormValues;
   const parsed = useMemo(() => parseCandidate(values, kind), [values, kind]);
   const evaluated = useMemo(
-    () => (parsed.ok ? { rig: parsed.rig, result: evaluateRig(parsed.rig, { tightMarginRatio }) } : null),
-    [parsed, tightMarginRatio],
+    () => (parsed.ok ? { rig: parsed.rig, result: evaluateRig(parsed.rig, { tightMarginRatio, place: place ?? undefined }) } : null),
+    [parsed, tightMarginRatio, place],
   );
   const lastGood = useRef<{ rig: RigInput; result: RigResult } | null>(null);
   if (evaluated) lastGood.current = evaluated;
@@ -180,6 +187,11 @@ function LiveVerdict({ control, kind, tightMarginRatio, onJump }: LiveProps) {
               <VerdictPanel result={result} rig={rig} />
             </div>
           </Card>
+          {localRulesOf(result) ? (
+            <Card className="px-4 py-4 sm:px-5">
+              <AppliedRules rules={localRulesOf(result)!} />
+            </Card>
+          ) : null}
         </div>
       </aside>
 
@@ -326,8 +338,10 @@ function SaveVehicleProfile({ onSave, getPart }: { onSave: NonNullable<CheckWork
 
 // ---------------------------------------------------------------- the workbench
 
-export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio, profiles, onSave, onSaveVehicleProfile, signedOut }: CheckWorkbenchProps) {
+export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio, profiles, onSave, onSaveVehicleProfile, signedOut, place: home }: CheckWorkbenchProps) {
   const [units, setUnits] = useState<UnitSystem>(startUnits);
+  const [place, setPlace] = useState<PlaceChoice>(home ?? null);
+  const glossary = (place && ruleSetFor(place)?.glossary) || "us";
   const [kind, setKind] = useState<HitchedKind>(initialRig?.accessory && !initialRig.trailer ? "accessory" : "trailer");
   const [collapsed, setCollapsed] = useState<Record<CardId, boolean>>({ vehicle: false, hitch: false, hitched: false });
   const [filledFrom, setFilledFrom] = useState<string | null>(null);
@@ -421,13 +435,13 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
 
   const saveWithErrors = useCallback(
     async (input: Parameters<NonNullable<CheckWorkbenchProps["onSave"]>>[0]) => {
-      const answer = await onSave!(input);
+      const answer = await onSave!({ ...input, place });
       for (const [path, messages] of Object.entries(answer.fieldErrors ?? {})) {
         if (messages[0] && path !== "customerName" && path !== "note") setError(path as never, { type: "server", message: messages[0] });
       }
       return answer;
     },
-    [onSave, setError],
+    [onSave, setError, place],
   );
 
   const vehiclePart = useCallback(() => {
@@ -442,6 +456,7 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
 
   return (
     <UnitsProvider value={units}>
+      <WordsProvider value={glossary}>
       <FormProvider {...form}>
         <div className="space-y-4">
           {/* Tools: units, examples, and the signed-out notice. */}
@@ -464,6 +479,7 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
                 ))}
               </div>
             </fieldset>
+            <PlacePicker value={place} home={home} onChange={setPlace} />
             <Field label="Try an example" className="w-full sm:w-80">
               <Select
                 value=""
@@ -525,7 +541,7 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
               </RigCard>
             </div>
 
-            <LiveVerdict control={control} kind={kind} tightMarginRatio={tightMarginRatio} onJump={jump} />
+            <LiveVerdict control={control} kind={kind} tightMarginRatio={tightMarginRatio} place={place} onJump={jump} />
 
             {onSave ? <SaveCheck onSave={saveWithErrors} getRig={currentRig} /> : null}
           </div>
@@ -534,6 +550,7 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
           </GlossaryDisclosure>
         </div>
       </FormProvider>
+      </WordsProvider>
     </UnitsProvider>
   );
 }

@@ -10,24 +10,41 @@ import { get, useFormContext, useFormState, type Path } from "react-hook-form";
 import { ChevronDown, ChevronRight, Pencil } from "lucide-react";
 import { Card, Field, NumberInput, Select, cn } from "@/components/ui";
 import type { UnitString, UnitSystem } from "@/lib/towing";
+import { localise } from "@/lib/towing/rules/glossary";
+import type { GlossaryId } from "@/lib/towing/rules/types";
 import { optionalChoice, parseTyped, type RigFormValues } from "./rig-form";
 
 export type RigPath = Path<RigFormValues>;
 
-export type QuantityKind = "mass" | "length" | "angle" | "percent";
+export type QuantityKind = "mass" | "length" | "angle" | "percent" | "force";
 
 const UnitsContext = createContext<UnitSystem>("imperial");
 export const UnitsProvider = UnitsContext.Provider;
+
+/** The place's glossary: labels and help read in its words (lib/towing/rules/glossary.ts). */
+const WordsContext = createContext<GlossaryId>("us");
+export const WordsProvider = WordsContext.Provider;
+
+/** A label or help text in the place's words. */
+export function useGlossary(): GlossaryId {
+  return useContext(WordsContext);
+}
+
+export function useWords(): (text: string) => string {
+  const glossary = useContext(WordsContext);
+  return (text: string) => localise(text, glossary);
+}
 
 export function useUnits(): UnitSystem {
   return useContext(UnitsContext);
 }
 
-const spoken: Record<string, string> = { lb: "pounds", kg: "kilograms", in: "inches", mm: "millimetres", "°": "degrees", "%": "percent" };
+const spoken: Record<string, string> = { lb: "pounds", kg: "kilograms", in: "inches", mm: "millimetres", "°": "degrees", "%": "percent", kN: "kilonewtons" };
 
 export function unitFor(kind: QuantityKind, units: UnitSystem): UnitString {
   if (kind === "mass") return units === "metric" ? "kg" : "lb";
   if (kind === "length") return units === "metric" ? "mm" : "in";
+  if (kind === "force") return "kN";
   return kind === "angle" ? "°" : "%";
 }
 
@@ -53,8 +70,9 @@ export function NumField({ name, label, kind, help, className, placeholder }: Nu
   const units = useUnits();
   const error = useFieldError(name);
   const unit = unitFor(kind, units);
+  const words = useWords();
   return (
-    <Field label={label} help={help} error={error} className={className}>
+    <Field label={words(label)} help={typeof help === "string" ? words(help) : help} error={error} className={className}>
       <NumberInput unit={unit} unitLabel={spoken[unit]} placeholder={placeholder} {...register(name, { setValueAs: parseTyped })} />
     </Field>
   );
@@ -75,15 +93,32 @@ export interface ChoiceFieldProps {
 export function ChoiceField({ name, label, help, options, emptyLabel, numeric, className }: ChoiceFieldProps) {
   const { register } = useFormContext<RigFormValues>();
   const error = useFieldError(name);
+  const words = useWords();
   return (
-    <Field label={label} help={help} error={error} className={className}>
+    <Field label={words(label)} help={typeof help === "string" ? words(help) : help} error={error} className={className}>
       <Select {...register(name, { setValueAs: numeric ? (v: unknown) => parseTyped(v) : optionalChoice })}>
         {emptyLabel !== undefined ? <option value="">{emptyLabel}</option> : null}
         {options.map((o) => (
           <option key={o.value} value={o.value}>
-            {o.label}
+            {words(o.label)}
           </option>
         ))}
+      </Select>
+    </Field>
+  );
+}
+
+/** "Not given", "Yes" or "No": a true/false figure that may be unknown (a breakaway device fitted?). */
+export function YesNoField({ name, label, help, className }: { name: RigPath; label: string; help?: string; className?: string }) {
+  const { register } = useFormContext<RigFormValues>();
+  const error = useFieldError(name);
+  const words = useWords();
+  return (
+    <Field label={words(label)} help={help ? words(help) : undefined} error={error} className={className}>
+      <Select {...register(name, { setValueAs: (v: unknown) => (v === "yes" || v === true ? true : v === "no" || v === false ? false : undefined) })}>
+        <option value="">Not given</option>
+        <option value="yes">Yes</option>
+        <option value="no">No</option>
       </Select>
     </Field>
   );

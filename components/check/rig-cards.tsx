@@ -10,7 +10,8 @@ import { Field, Select, cn } from "@/components/ui";
 import { formatQuantity } from "@/lib/format";
 import { ACCESSORY_TYPES, BALL_SIZES, BRAKE_TYPES, RECEIVER_SIZES, TRAILER_TYPES, type AccessoryType, type TrailerType } from "@/lib/towing";
 import { TermHelp } from "@/components/glossary/term-help";
-import { ChoiceField, FieldGrid, FieldGroup, MoreMeasurements, NumField, unitFor, useUnits } from "./field-parts";
+import { ChoiceField, FieldGrid, FieldGroup, MoreMeasurements, NumField, unitFor, useGlossary, useUnits, YesNoField } from "./field-parts";
+import type { GlossaryId } from "@/lib/towing/rules/types";
 import type { HitchedKind, RigFormValues } from "./rig-form";
 
 export const TRAILER_TYPE_LABELS: Record<TrailerType, string> = {
@@ -243,6 +244,8 @@ export function HitchFields({ kind }: { kind: HitchedKind }) {
           <NumField name="hitch.twRating" label="Hitch TW rating" kind="mass" help={<TermHelp term="tongue-weight">Hitch label: tongue weight, weight-carrying line.</TermHelp>} />
           <NumField name="hitch.receiverHeight" label="Receiver height" kind="length" help={<TermHelp term="receiver">Ground to the top inside edge of the receiver opening, vehicle loaded, unhitched.</TermHelp>} />
           <NumField name="hitch.pinToFascia" label="Pin to fascia" kind="length" help={<TermHelp term="fascia" question="What is the fascia?">Centre of the pin hole forward to the outermost point of the bumper.</TermHelp>} />
+          <NumField name="hitch.dValue" label="Hitch D value (marked)" kind="force" help="On the plate of a tow bar built to UN Regulation No. 55, in kN." />
+          <NumField name="hitch.sValue" label="Hitch ball S value (marked)" kind="mass" help="The static vertical load stamped on the ball or the tow bar's plate." />
         </FieldGrid>
         <div className="mt-4">
           <HitchDiagram />
@@ -343,7 +346,24 @@ function WdUsed() {
   );
 }
 
+/** The trailer's plated maximum, in the place's own name for it. */
+const PLATE_LABEL: Record<GlossaryId, string> = {
+  us: "Trailer GVWR (plate)",
+  ca: "Trailer GVWR (plate)",
+  gb: "Trailer MAM (plate)",
+  eu: "Trailer maximum mass (plate)",
+  au: "ATM on the plate",
+};
+
+const LICENCE_OPTIONS = [
+  { value: "B", label: "Category B (car)" },
+  { value: "B96", label: "Category B with code 96" },
+  { value: "BE", label: "Category BE" },
+  { value: "other", label: "Another licence" },
+];
+
 export function TrailerFields({ tools }: { tools?: ReactNode }) {
+  const glossary = useGlossary();
   return (
     <>
       {tools}
@@ -353,6 +373,15 @@ export function TrailerFields({ tools }: { tools?: ReactNode }) {
           <NumField name="trailer.grossTrailerWeight" label="Gross trailer weight" kind="mass" help={<TermHelp term="gross-trailer-weight">Loaded as it will travel: a public scale, or the trailer&rsquo;s own GVWR as the upper bound.</TermHelp>} />
           <NumField name="trailer.tongueWeight" label="Tongue weight" kind="mass" help={<TermHelp term="tongue-weight">A tongue scale, a bathroom scale and beam, or the difference at a public scale; spring bars released.</TermHelp>} />
           <TongueBasis />
+          <NumField name="trailer.mam" label={PLATE_LABEL[glossary]} kind="mass" help="The most the trailer may weigh loaded, from its plate or papers: licences and the coupling's D value read it." />
+        </FieldGrid>
+      </FieldGroup>
+      <FieldGroup title="Brakes and licence" note="What the rules where it is driven ask for: brakes, a breakaway device and the driver's licence.">
+        <FieldGrid>
+          <ChoiceField name="trailer.brakes" label="Trailer brakes" emptyLabel="Not given" options={BRAKE_TYPES.map((b) => ({ value: b, label: BRAKE_LABELS[b] }))} />
+          <YesNoField name="trailer.brakesAllWheels" label="Brakes on every wheel" help="Look behind each wheel, or the trailer's papers." />
+          <YesNoField name="trailer.breakaway" label="Breakaway device" help="Applies the trailer's brakes if it comes off the hitch ball." />
+          <ChoiceField name="driver.licence" label="Driver's licence" emptyLabel="Not given" options={LICENCE_OPTIONS} help="Read by the licence rules where a place has them; not given means check the licence." />
         </FieldGrid>
       </FieldGroup>
       <FieldGroup title="Coupler, ball and chains" note="Each is stamped or tagged on the part itself.">
@@ -364,6 +393,7 @@ export function TrailerFields({ tools }: { tools?: ReactNode }) {
           <NumField name="trailer.ballRating" label="Ball rating" kind="mass" help="Stamped on top of the ball." />
           <NumField name="trailer.safetyChainRating" label="Safety chain rating (each)" kind="mass" help={<TermHelp term="safety-chains" question="What are safety chains?">Tag or stamp on each chain.</TermHelp>} />
           <ChoiceField name="trailer.brakes" label="Trailer brakes" emptyLabel="Not given" options={BRAKE_TYPES.map((b) => ({ value: b, label: BRAKE_LABELS[b] }))} help={<TermHelp term="surge-brakes" question="What are surge brakes?">Electric brakes need a brake controller in the vehicle; surge brakes work from the trailer pushing on the ball.</TermHelp>} />
+          <NumField name="trailer.couplingDValue" label="Coupler D value (marked)" kind="force" help="On the coupler's plate, in kN, where it is built to UN Regulation No. 55." />
         </FieldGrid>
       </FieldGroup>
       <FieldGroup title="Weight distribution" note="Front fender height: ground to the lip of the front wheel opening, straight above the wheel centre, on level ground. Unhitched, hitched with the spring bars released, then hitched with the bars set. Chock the trailer first.">

@@ -73,7 +73,7 @@ export function toRigCandidate(values: RigFormValues, kind: HitchedKind): unknow
   const out: Plain = { units: values.units };
   if (typeof v.name === "string" && v.name.trim() !== "") out.name = v.name;
   out.vehicle = (isPlain(v.vehicle) && prune(v.vehicle)) || {};
-  for (const key of ["hitch", "load", "extender"] as const) {
+  for (const key of ["hitch", "load", "extender", "driver"] as const) {
     const group = isPlain(v[key]) ? prune(v[key] as Plain) : undefined;
     if (group) out[key] = group;
   }
@@ -158,6 +158,7 @@ export function emptyFormValues(units: UnitSystem): RigFormValues {
     extender: {},
     weightDistribution: { used: false },
     accessory: { type: "platform-rack" },
+    driver: {},
   };
 }
 

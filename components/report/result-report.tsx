@@ -16,6 +16,7 @@ import { verdictMeaningKey } from "./meaning";
 import { PrintButton } from "./print-button";
 import { reportFigures } from "./report-charts";
 import { describeRig, listWords } from "./rig-summary";
+import { AppliedRules, localRulesOf } from "@/components/rules/applied-rules";
 import "./result-report.css";
 
 export interface ResultReportProps {
@@ -33,6 +34,8 @@ export interface ResultReportProps {
   linkUrl?: string;
   /** IANA time zone for the date (the shop's); the server's own zone when absent. */
   timeZone?: string;
+  /** Today's version of the rule set the result was read with, to say when the rules have changed since. */
+  currentRuleSetVersion?: string;
 }
 
 /**
@@ -117,7 +120,8 @@ function reportTexts(rig: RigInput, result: RigResult): string[] {
 
 const H2 = "text-sm font-semibold tracking-wide text-ink-soft uppercase print:text-[8pt]";
 
-export function ResultReport({ shopName, createdAt, customerName, rig, result, qrSvg, linkUrl, timeZone }: ResultReportProps) {
+export function ResultReport({ shopName, createdAt, customerName, rig, result, qrSvg, linkUrl, timeZone, currentRuleSetVersion }: ResultReportProps) {
+  const localRules = localRulesOf(result);
   const { verdict } = result;
   const date = formatReportDate(createdAt, timeZone);
   const cautions = verdict.cautions.length ? verdict.cautions : FALLBACK_CAUTIONS;
@@ -200,6 +204,12 @@ export function ResultReport({ shopName, createdAt, customerName, rig, result, q
         </ul>
       </section>
 
+      {localRules ? (
+        <section aria-label="The rules where you drive" className="mt-6 print:mt-1.5">
+          <AppliedRules rules={localRules} variant="report" currentVersion={currentRuleSetVersion} />
+        </section>
+      ) : null}
+
       {/* On paper the charts and the cautions share one band across the sheet. */}
       <div className={cn("print:mt-1.5 print:grid print:gap-4 print:break-inside-avoid", figures.length ? "print:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]" : "")}>
         {figures.length ? (
@@ -259,6 +269,7 @@ export function ResultReport({ shopName, createdAt, customerName, rig, result, q
       <footer className="mt-8 border-t border-rule pt-3 text-xs text-ink-faint print:mt-1.5 print:pt-0.5 print:text-[7pt]">
         <p>
           Computed by Towmargin core {result.coreVersion}, from the figures {shopName} entered on {date}.
+          {result.rules ? ` Rules read: ${result.rules.title}, rule set ${result.rules.ruleSetVersion}.` : ""}
         </p>
       </footer>
     </article>

@@ -4,6 +4,7 @@ import { getDb } from "@/db/client";
 import { savedChecks, users } from "@/db/schema";
 import { can } from "@/lib/roles";
 import { evaluateRig } from "@/lib/towing";
+import { placeFrom } from "@/lib/towing/rules/places";
 import type { RigResult, VerdictLevel } from "@/lib/towing/types";
 import type { RigInput } from "@/lib/towing/input";
 import type { ListChecksQuery, SaveCheckInput } from "@/lib/validation/checks";
@@ -40,7 +41,8 @@ export function hitchedLabel(rig: RigInput): string {
  */
 export async function saveCheck(access: AccessContext, input: SaveCheckInput): Promise<{ id: string; result: RigResult }> {
   if (!can(access.role, "checks.save")) throw new AccessDenied("checks.save");
-  const result = evaluateRig(input.rig, { tightMarginRatio: access.organisation.tightMarginRatio });
+  const place = input.place === undefined ? placeFrom(access.organisation.country, access.organisation.region) : (input.place ?? undefined);
+  const result = evaluateRig(input.rig, { tightMarginRatio: access.organisation.tightMarginRatio, place });
   const vehicleLabel = input.rig.name?.trim() || (await matchVehicleProfileName(access, input.rig)) || "Typed vehicle";
   const id = newId();
   const db = await getDb();

@@ -21,6 +21,13 @@ export async function updateOrganisationSettings(access: AccessContext, input: O
   const db = await getDb();
   await db
     .update(organisations)
-    .set({ name: input.name, units: input.units, tightMarginRatio: input.tightMarginPercent / 100, linkLifetimeDays: input.linkLifetimeDays })
+    .set({
+      name: input.name,
+      units: input.units,
+      tightMarginRatio: input.tightMarginPercent / 100,
+      linkLifetimeDays: input.linkLifetimeDays,
+      country: input.country ?? null,
+      region: input.country ? (input.region ?? null) : null,
+    })
     .where(eq(organisations.id, access.organisation.id));
 }

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { ROLES } from "@/lib/roles";
+import { COUNTRIES } from "@/lib/towing/rules/places";
 
 export const emailField = z
   .string({ error: "Enter an e-mail address." })
@@ -104,6 +105,21 @@ export const organisationSettingsSchema = z.object({
     .int("Use whole days.")
     .min(1, "Use at least 1 day.")
     .max(730, "Use at most 730 days (two years)."),
+  /** Where the organisation works; "" for not set (no local rules are read). */
+  country: z
+    .string()
+    .optional()
+    .transform((v) => v || undefined)
+    .refine((v) => v === undefined || COUNTRIES.some((c) => c.code === v), { error: "Country: choose one from the list." }),
+  region: z
+    .string()
+    .optional()
+    .transform((v) => v || undefined),
+}).superRefine((value, ctx) => {
+  if (value.region === undefined) return;
+  const country = COUNTRIES.find((c) => c.code === value.country);
+  if (!country || !country.regions.some((r) => r.code === value.region))
+    ctx.addIssue({ code: "custom", path: ["region"], message: "State or province: choose one from the list for this country." });
 });
 
 export type SignInInput = z.infer<typeof signInSchema>;

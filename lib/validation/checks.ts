@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { placeSchema } from "@/lib/towing/rules/places";
 import { rigInputSchema } from "./rig";
 import { VERDICT_LEVELS } from "../towing/types";
 
@@ -14,6 +15,8 @@ export const saveCheckSchema = z.object({
   rig: rigInputSchema,
   customerName: optionalText(120, "Customer name"),
   note: optionalText(1000, "Note"),
+  /** The place this check is read for; left out: the organisation's own; null: no local rules. */
+  place: placeSchema.nullable().optional(),
 });
 export type SaveCheckInput = z.output<typeof saveCheckSchema>;
 

@@ -9,6 +9,7 @@ import { rigFromProfiles } from "@/lib/server/fleet";
 import { figureSourcesOf } from "@/lib/server/installations";
 import { listProfilesForCheck } from "@/lib/server/profiles";
 import { entityId } from "@/lib/validation/checks";
+import { placeFrom } from "@/lib/towing/rules/places";
 import { saveCheckAction, saveVehicleProfileAction } from "./actions";
 
 export const metadata: Metadata = { title: "Check a rig" };
@@ -53,6 +54,7 @@ export default async function CheckPage({ searchParams }: { searchParams: Promis
         initialRig={initialRig}
         units={initialRig?.units ?? access.organisation.units}
         tightMarginRatio={access.organisation.tightMarginRatio}
+        place={source?.result.rules?.place ?? placeFrom(access.organisation.country, access.organisation.region)}
         profiles={profiles}
         onSave={can(access.role, "checks.save") ? saveCheckAction : undefined}
         onSaveVehicleProfile={can(access.role, "profiles.save") ? saveVehicleProfileAction : undefined}

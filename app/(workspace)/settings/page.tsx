@@ -21,6 +21,8 @@ export default async function SettingsPage() {
               units: organisation.units,
               tightMarginPercent: Math.round(organisation.tightMarginRatio * 1000) / 10,
               linkLifetimeDays: lifetime,
+              country: organisation.country ?? "",
+              region: organisation.region ?? "",
             }}
           />
         </CardBody>

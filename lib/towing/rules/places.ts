@@ -133,3 +133,24 @@ export function placeLabel(place: Place): string {
   const region = place.region ? country.regions.find((r) => r.code === place.region) : undefined;
   return region ? `${region.name}, ${country.name}` : country.name;
 }
+
+/** A place from stored columns (an organisation's setting), or undefined when none is set or it is unknown. */
+export function placeFrom(country: string | null | undefined, region?: string | null): Place | undefined {
+  if (!country) return undefined;
+  const place: Place = region ? { country, region } : { country };
+  return ruleSetFor(place) ? place : undefined;
+}
+
+/**
+ * How a stored result's rule set stands today: the version it was read with, and today's version of the same
+ * set when that differs (the stored result never changes; the screen says the rules have moved on).
+ */
+export function ruleSetStanding(applied: { place: Place; ruleSetId: string; ruleSetVersion: string } | undefined): {
+  readWith?: string;
+  current?: string;
+  changed: boolean;
+} {
+  if (!applied) return { changed: false };
+  const now = RULE_SETS[applied.ruleSetId] ?? ruleSetFor(applied.place);
+  return { readWith: applied.ruleSetVersion, current: now?.version, changed: !!now && now.version !== applied.ruleSetVersion };
+}

@@ -12,6 +12,8 @@ import { linkLifetimeDays } from "@/lib/server/organisation";
 import { listShareLinks } from "@/lib/server/share-links";
 import { entityId } from "@/lib/validation/checks";
 import { SharePanel } from "./share-panel";
+import { AppliedRules, localRulesOf } from "@/components/rules/applied-rules";
+import { ruleSetStanding } from "@/lib/towing/rules/places";
 
 export const metadata: Metadata = { title: "Saved check" };
 
@@ -23,11 +25,13 @@ export default async function SavedCheckPage({ params }: { params: Promise<{ id:
   const check = id.success ? await getCheck(access, id.data) : undefined;
   if (!check) notFound();
   const links = await listShareLinks(access, check.id);
+  const localRules = localRulesOf(check.result);
+  const standing = ruleSetStanding(check.result.rules);
   return (
     <>
     {/* On paper the check prints as the customer's one-sheet report. */}
     <div className="hidden print:block">
-      <ResultReport shopName={access.organisation.name} createdAt={check.createdAt} customerName={check.customerName} rig={check.rig} result={check.result} />
+      <ResultReport shopName={access.organisation.name} createdAt={check.createdAt} customerName={check.customerName} rig={check.rig} result={check.result} currentRuleSetVersion={standing.current} />
     </div>
     <div className="flex flex-col gap-6 print:hidden">
       <PageHeader
@@ -37,7 +41,7 @@ export default async function SavedCheckPage({ params }: { params: Promise<{ id:
           </Link>
         }
         title={`${check.vehicleLabel ?? "Vehicle"} · ${check.hitchedLabel ?? "nothing hitched"}`}
-        description={`Saved ${when.format(check.createdAt)}${check.customerName ? ` for ${check.customerName}` : ""}. Computed by Towmargin core ${check.coreVersion}; this snapshot never changes.`}
+        description={`Saved ${when.format(check.createdAt)}${check.customerName ? ` for ${check.customerName}` : ""}. Computed by Towmargin core ${check.coreVersion}${check.result.rules ? `, read against the rules of ${check.result.rules.title} (rule set ${check.result.rules.ruleSetVersion})` : ""}; this snapshot never changes.`}
         actions={
           <>
             <Link href={`/check?from=${check.id}`} className={buttonClasses({ variant: "secondary" })}>
@@ -81,6 +85,13 @@ export default async function SavedCheckPage({ params }: { params: Promise<{ id:
         </CardBody>
       </Card>
       <VerdictPanel result={check.result} rig={check.rig} />
+      {localRules ? (
+        <Card>
+          <CardBody>
+            <AppliedRules rules={localRules} currentVersion={standing.changed ? standing.current : undefined} />
+          </CardBody>
+        </Card>
+      ) : null}
     </div>
     </>
   );
