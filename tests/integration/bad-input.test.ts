@@ -51,6 +51,9 @@ function rigFields(prefix: string): FieldSpec[] {
     { path: `${prefix}hitch.receiverHeight`, kind: "measure" },
     { path: `${prefix}trailer.type`, kind: "enum", required: true },
     { path: `${prefix}name`, kind: "optionalText" },
+    { path: `${prefix}trailer.mam`, kind: "measure" },
+    { path: `${prefix}hitch.dValue`, kind: "measure" },
+    { path: `${prefix}driver.licence`, kind: "enum" },
   ];
 }
 
@@ -113,8 +116,14 @@ const TARGETS: Target[] = [
     name: "save a check (action)",
     actor: "staffA",
     transport: "value",
-    fields: [...rigFields("rig."), { path: "customerName", kind: "optionalText" }, { path: "note", kind: "optionalText" }],
-    base: () => ({ rig: structuredClone(camper), customerName: "Tamsin Orrery" }),
+    fields: [
+      ...rigFields("rig."),
+      { path: "customerName", kind: "optionalText" },
+      { path: "note", kind: "optionalText" },
+      { path: "place.country", kind: "enum", required: true },
+      { path: "place.region", kind: "enum", accepts: ["empty string"] },
+    ],
+    base: () => ({ rig: structuredClone(camper), customerName: "Tamsin Orrery", place: { country: "US", region: "TX" } }),
     call: (input) => fromAction(() => saveCheckAction(input)),
   },
   {
@@ -203,8 +212,10 @@ const TARGETS: Target[] = [
       { path: "units", kind: "enum", required: true },
       { path: "tightMarginPercent", kind: "formNumber", required: true },
       { path: "linkLifetimeDays", kind: "formNumber", required: true },
+      { path: "country", kind: "enum", accepts: ["empty string"] },
+      { path: "region", kind: "enum", accepts: ["empty string"] },
     ],
-    base: () => ({ name: "Alder Lane Hitch", units: "imperial", tightMarginPercent: "10", linkLifetimeDays: "180" }),
+    base: () => ({ name: "Alder Lane Hitch", units: "imperial", tightMarginPercent: "10", linkLifetimeDays: "180", country: "US", region: "TX" }),
     call: (input) => fromAction(() => saveSettings(initialFormState, input as FormData)),
   },
   {

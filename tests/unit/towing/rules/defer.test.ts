@@ -113,3 +113,14 @@ describe("the rule sets as data", () => {
       for (const row of set.rules) if (row.test === "caravan-match" || row.test === "noseweight-band") expect(row.kind).toBe("guideline");
   });
 });
+
+describe("the rules note", () => {
+  it("docs/local-rules.md names every rule and every set's version", async () => {
+    const { readFileSync } = await import("node:fs");
+    const text = readFileSync("docs/local-rules.md", "utf8");
+    for (const set of Object.values(RULE_SETS)) {
+      expect(text).toContain(`\`${set.id}\`, version ${set.version}`);
+      for (const row of set.rules) expect(text).toContain(`\`${row.id}\``);
+    }
+  });
+});
