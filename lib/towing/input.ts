@@ -144,7 +144,7 @@ function rigShape<U extends UnitSystem>(units: U) {
         twRatingWd: m("hitch.twRatingWd", "Hitch tongue weight rating with weight distribution", 0, 6000),
         receiverHeight: l("hitch.receiverHeight", "Receiver height", 4, 40),
         pinToFascia: l("hitch.pinToFascia", "Pin hole to fascia", 0, 24),
-        dValue: field(units, "hitch.dValue", "Tow bar D value", "force", 0, 200),
+        dValue: field(units, "hitch.dValue", "Tow bar D value", "force", 1, 200),
         sValue: m("hitch.sValue", "Tow ball S value (static vertical load)", 0, 6000),
       })
       .optional(),
@@ -171,7 +171,7 @@ function rigShape<U extends UnitSystem>(units: U) {
         mam: m("trailer.mam", "Trailer's plated maximum mass", 50, 30000),
         brakesAllWheels: z.boolean({ error: "Brakes on every wheel: yes or no." }).optional(),
         breakaway: z.boolean({ error: "Breakaway device: yes or no." }).optional(),
-        couplingDValue: field(units, "trailer.couplingDValue", "Coupling head D value", "force", 0, 200),
+        couplingDValue: field(units, "trailer.couplingDValue", "Coupling head D value", "force", 1, 200),
       })
       .optional(),
     ballMount: z

@@ -1,0 +1,97 @@
+/**
+ * Shops in Great Britain, Australia and Texas check the same rig and each reads its own rules, words and
+ * sources: on the counter screen, on the saved check and on the customer's printed sheet.
+ */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { DESKTOP, openBrowser, PHONE, screenshot, signIn } from "./support/browser";
+
+type Session = Awaited<ReturnType<typeof openBrowser>>;
+
+const PLACES = [
+  {
+    name: "gb",
+    country: "United Kingdom",
+    regionLabel: "Nation",
+    region: "England",
+    heading: /Rules applied: Great Britain/,
+    tongueLabel: "Noseweight",
+    rule: "gb.brakes.over-750",
+    source: "gov.uk, Towing with a car",
+  },
+  {
+    name: "au",
+    country: "Australia",
+    regionLabel: "State or territory",
+    region: "Queensland",
+    heading: /Rules applied: Australia/,
+    tongueLabel: "Towball mass",
+    rule: "au.brakes.over-750",
+    source: "Australian Design Rule 38 and Vehicle Standards Bulletin VSB 1",
+  },
+  {
+    name: "us-tx",
+    country: "United States",
+    regionLabel: "State",
+    region: "Texas",
+    heading: /Rules applied: Texas/,
+    tongueLabel: "Tongue weight",
+    rule: "us-tx.brakes.4500",
+    source: "Texas Transportation Code",
+  },
+];
+
+describe("the rules where the rig is driven", () => {
+  let owner: Session;
+  let phone: Session;
+  beforeAll(async () => {
+    owner = await openBrowser(DESKTOP);
+    phone = await openBrowser(PHONE);
+    await signIn(owner.page, "owner@quillfield.example.com");
+    await signIn(phone.page, "counter@quillfield.example.com");
+  });
+  afterAll(async () => {
+    await owner.close();
+    await phone.close();
+  });
+
+  for (const place of PLACES) {
+    it(`a shop set to ${place.region} reads its own rules, terms and sources`, async () => {
+      const { page } = owner;
+      await page.goto("/settings");
+      await page.getByLabel("Where you work").selectOption({ label: place.country });
+      await page.getByLabel(place.regionLabel).selectOption({ label: place.region });
+      await page.getByTestId("settings-rule-set").waitFor();
+      await page.getByRole("button", { name: "Save settings" }).click();
+      await page.getByText("Settings saved.").waitFor();
+      await screenshot(page, `rules-settings-${place.name}`);
+
+      await page.goto("/check");
+      await page.getByLabel("Try an example").selectOption({ label: "Small boat on a mid-size SUV (metric)" });
+      const rules = page.getByTestId("applied-rules").first();
+      await rules.getByRole("heading", { name: place.heading }).waitFor();
+      await rules.locator(`[data-rule="${place.rule}"]`).getByText(`Source: ${place.source}`, { exact: false }).waitFor();
+      await page.getByLabel(place.tongueLabel, { exact: true }).waitFor();
+      await screenshot(page, `rules-check-${place.name}`);
+
+      // The customer's sheet: the saved check prints as the customer's report, with the rules and their sources.
+      await page.getByLabel("Customer name").fill(`Rules check ${place.name}`);
+      await page.getByRole("button", { name: "Save check" }).click();
+      await page.getByRole("link", { name: "Open the saved check" }).click();
+      await page.waitForURL(/\/checks\/[^/]+$/);
+      await page.getByTestId("applied-rules").first().getByRole("heading", { name: place.heading }).waitFor();
+      await page.emulateMedia({ media: "print" });
+      const report = page.getByRole("heading", { name: /The rules where you drive/ });
+      await report.waitFor();
+      await screenshot(page, `rules-report-${place.name}`);
+      await page.emulateMedia({ media: "screen" });
+
+      // A phone at the same shop sees the same rules.
+      await phone.page.goto("/check");
+      await phone.page.getByLabel("Try an example").selectOption({ label: "Small boat on a mid-size SUV (metric)" });
+      await phone.page.getByRole("button", { name: /Checks/ }).first().click();
+      await phone.page.getByTestId("applied-rules").first().getByRole("heading", { name: place.heading }).waitFor();
+      await screenshot(phone.page, `rules-check-${place.name}-phone`);
+      expect(await phone.page.getByLabel(place.tongueLabel, { exact: true }).count()).toBe(1);
+    });
+  }
+});
