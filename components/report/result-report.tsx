@@ -36,6 +36,8 @@ export interface ResultReportProps {
   timeZone?: string;
   /** Today's version of the rule set the result was read with, to say when the rules have changed since. */
   currentRuleSetVersion?: string;
+  /** The place's words for the report's own sentences (the result's texts already are); the page passes it. */
+  words?: (text: string) => string;
 }
 
 /**
@@ -120,7 +122,7 @@ function reportTexts(rig: RigInput, result: RigResult): string[] {
 
 const H2 = "text-sm font-semibold tracking-wide text-ink-soft uppercase print:text-[8pt]";
 
-export function ResultReport({ shopName, createdAt, customerName, rig, result, qrSvg, linkUrl, timeZone, currentRuleSetVersion }: ResultReportProps) {
+export function ResultReport({ shopName, createdAt, customerName, rig, result, qrSvg, linkUrl, timeZone, currentRuleSetVersion, words = (text) => text }: ResultReportProps) {
   const localRules = localRulesOf(result);
   const { verdict } = result;
   const date = formatReportDate(createdAt, timeZone);
@@ -190,7 +192,7 @@ export function ResultReport({ shopName, createdAt, customerName, rig, result, q
         <h2 id="report-rig" className={H2}>
           The rig
         </h2>
-        <p className="mt-1.5 max-w-prose leading-relaxed print:mt-0.5 print:max-w-none print:text-[8pt] print:leading-snug">{describeRig(rig)}</p>
+        <p className="mt-1.5 max-w-prose leading-relaxed print:mt-0.5 print:max-w-none print:text-[8pt] print:leading-snug">{words(describeRig(rig))}</p>
       </section>
 
       <section aria-labelledby="report-checks" className="mt-6 print:mt-1.5">

@@ -5,6 +5,7 @@ import { HandOverConfirmation } from "@/components/installations/hand-over-confi
 import { HandOverSheet } from "@/components/installations/hand-over-sheet";
 import { ResultReport } from "@/components/report/result-report";
 import { handOverByToken } from "@/lib/server/installations";
+import { localise } from "@/lib/towing/rules/glossary";
 import { resolveShareToken, shareUrl } from "@/lib/server/share-links";
 
 export const metadata: Metadata = {
@@ -26,7 +27,7 @@ export default async function SharedResultPage({ params }: { params: Promise<{ t
     const qrSvg = await QRCode.toString(url, { type: "svg", margin: 0, errorCorrectionLevel: "M" });
     return (
       <main className="mx-auto w-full max-w-3xl px-4 py-6 sm:px-6 sm:py-10 print:max-w-none print:p-0">
-        <ResultReport shopName={share.shopName} createdAt={share.createdAt} customerName={share.customerName} rig={share.rig} result={share.result} qrSvg={qrSvg} linkUrl={url} />
+        <ResultReport shopName={share.shopName} createdAt={share.createdAt} customerName={share.customerName} rig={share.rig} result={share.result} words={(text) => localise(text, share.result.rules?.glossary ?? "us")} qrSvg={qrSvg} linkUrl={url} />
       </main>
     );
   }

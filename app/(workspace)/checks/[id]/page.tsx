@@ -4,6 +4,7 @@ import { notFound } from "next/navigation";
 import { VerdictPanel } from "@/components/check/verdict-panel";
 import { PrintButton } from "@/components/report/print-button";
 import { ResultReport } from "@/components/report/result-report";
+import { localise } from "@/lib/towing/rules/glossary";
 import { Card, CardBody, CardHeader, PageHeader, buttonClasses } from "@/components/ui";
 import { can } from "@/lib/roles";
 import { requirePage } from "@/lib/server/access";
@@ -31,7 +32,7 @@ export default async function SavedCheckPage({ params }: { params: Promise<{ id:
     <>
     {/* On paper the check prints as the customer's one-sheet report. */}
     <div className="hidden print:block">
-      <ResultReport shopName={access.organisation.name} createdAt={check.createdAt} customerName={check.customerName} rig={check.rig} result={check.result} currentRuleSetVersion={standing.current} />
+      <ResultReport shopName={access.organisation.name} createdAt={check.createdAt} customerName={check.customerName} rig={check.rig} result={check.result} words={(text) => localise(text, check.result.rules?.glossary ?? "us")} currentRuleSetVersion={standing.current} />
     </div>
     <div className="flex flex-col gap-6 print:hidden">
       <PageHeader
