@@ -278,6 +278,7 @@ const SECTION_WORDS: Record<string, string> = {
   weightDistribution: "The weight-distribution section",
   load: "The load section",
   accessory: "The accessory section",
+  driver: "The driver section",
 };
 
 /** zod's own default messages ("Invalid input: expected object, received undefined") are never shown. */
