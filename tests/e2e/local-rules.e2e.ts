@@ -3,7 +3,8 @@
  * sources: on the counter screen, on the saved check and on the customer's printed sheet.
  */
 import { afterAll, beforeAll, describe, it } from "vitest";
-import { DESKTOP, openBrowser, PHONE, screenshot, signIn } from "./support/browser";
+import { join } from "node:path";
+import { DESKTOP, openBrowser, PHONE, SCREENSHOT_DIR, screenshot, signIn } from "./support/browser";
 
 type Session = Awaited<ReturnType<typeof openBrowser>>;
 
@@ -72,17 +73,20 @@ describe("the rules where the rig is driven", () => {
       await rules.locator(`[data-rule="${place.rule}"]`).getByText(`Source: ${place.source}`, { exact: false }).waitFor();
       await page.getByLabel(place.tongueLabel, { exact: true }).waitFor();
       await screenshot(page, `rules-check-${place.name}`);
+      await rules.screenshot({ path: join(SCREENSHOT_DIR, `rules-panel-${place.name}.png`) });
+      await page.locator("#workbench-vehicle").screenshot({ path: join(SCREENSHOT_DIR, `rules-vehicle-card-${place.name}.png`) }).catch(() => undefined);
 
       // The customer's sheet: the saved check prints as the customer's report, with the rules and their sources.
       await page.getByLabel("Customer name").fill(`Rules check ${place.name}`);
       await page.getByRole("button", { name: "Save check" }).click();
       await page.getByRole("link", { name: "Open the saved check" }).click();
       await page.waitForURL(/\/checks\/[^/]+$/);
-      await page.getByTestId("applied-rules").first().getByRole("heading", { name: place.heading }).waitFor();
+      await page.locator("[data-testid=applied-rules]:visible").first().getByRole("heading", { name: place.heading }).waitFor();
       await page.emulateMedia({ media: "print" });
       const report = page.getByRole("heading", { name: /The rules where you drive/ });
       await report.waitFor();
       await screenshot(page, `rules-report-${place.name}`);
+      await page.locator("[data-testid=applied-rules]:visible").first().screenshot({ path: join(SCREENSHOT_DIR, `rules-report-panel-${place.name}.png`) });
       await page.emulateMedia({ media: "screen" });
 
       // A phone at the same shop sees the same rules.

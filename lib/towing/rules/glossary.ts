@@ -131,6 +131,9 @@ export function localise(text: string, glossary: GlossaryId): string {
   if (glossary === "us" || !text) return text;
   let out = text;
   for (const r of replacements(glossary)) out = out.replace(r.pattern, r.to);
+  // A label or sentence that began with a capital still does ("GCWR" → "Gross train weight").
+  const first = text[0]!;
+  if (first !== first.toLowerCase() && out[0] !== out[0]!.toUpperCase()) out = out[0]!.toUpperCase() + out.slice(1);
   return out;
 }
 

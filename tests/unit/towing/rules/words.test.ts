@@ -19,6 +19,9 @@ describe("the glossary", () => {
     expect(localise("Tongue-weight share of the travel trailer, under the GCWR", "gb")).toBe("Noseweight share of the caravan, under the gross train weight");
     expect(localise("The tongue weight is over the curb weight", "au")).toBe("The towball mass is over the kerb mass");
     expect(localise("GVWR", "us")).toBe("GVWR");
+    expect(localise("GCWR", "gb")).toBe("Gross train weight");
+    expect(localise("GCWR", "au")).toBe("GCM");
+    expect(localise("the GCWR", "gb")).toBe("the gross train weight");
   });
 });
 
