@@ -107,7 +107,7 @@ async function run(owner: Session, phone: Session, place: (typeof PLACES)[number
   await page.waitForURL(/\/checks\/[^/]+$/);
   await page.locator("[data-testid=applied-rules]:visible").first().getByRole("heading", { name: place.heading }).waitFor();
   await page.emulateMedia({ media: "print" });
-  const report = page.getByRole("heading", { name: /The rules where you drive/ });
+  const report = page.getByRole("heading", { name: /The rules where you drive: / });
   await report.waitFor();
   await screenshot(page, `rules-report-${place.name}`);
   await page.locator("[data-testid=applied-rules]:visible").first().screenshot({ path: join(SCREENSHOT_DIR, `rules-report-panel-${place.name}.png`) });
