@@ -430,7 +430,7 @@ export function evaluateRules(d: Derived, set: RuleSet, c: Ctx): RuleEvaluation 
         const miss: MissingField[] = [];
         if (d.gtw === undefined) miss.push(need("trailer.grossTrailerWeight"));
         if (r.trailer?.mam === undefined) miss.push(need("trailer.mam"));
-        f = upperLimit(row, c, d.gtw, r.trailer?.mam, miss, "gross trailer weight", "trailer's plated maximum mass");
+        f = upperLimit(row, c, d.gtw, r.trailer?.mam, miss, "loaded trailer's weight", "trailer's plated maximum mass");
         break;
       }
       case "defer":
