@@ -84,7 +84,7 @@ const sha256 = (value: string) => createHash("sha256").update(value).digest("hex
 const OWNER_OF_B: AccessContext = {
   ...OWNER_OF_A,
   user: { id: PEOPLE.ownerB.id, email: "ownerb@example.com", name: "ownerB" },
-  organisation: { id: ORG_B, name: "Birchmoor Fleet", kind: "fleet", units: "imperial", tightMarginRatio: 0.1 },
+  organisation: { id: ORG_B, name: "Birchmoor Fleet", kind: "fleet", units: "imperial", tightMarginRatio: 0.1, country: null, region: null },
   memberships: [{ organisationId: ORG_B, organisationName: "Birchmoor Fleet", role: "owner" }],
 };
 

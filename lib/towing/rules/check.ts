@@ -1,7 +1,9 @@
 /**
  * The "local-rules" check: the findings of the place's rule set as one check of the rig, so the verdict,
  * the counter screen and the customer's page read them like any other check. A known legal "over" makes
- * the rig over; a deferred or unconfirmed rule keeps it from reading "within".
+ * the rig over; a deferred or unconfirmed rule reads "incomplete", so the rig reads "not confirmed", never
+ * "within"; a guideline reads at most "tight". The check's status is the worst of its findings in the core's
+ * order (over > incomplete > adjust > tight > within).
  */
 import { NO_STEPS, NO_TEXT, worst, type Ctx } from "../context";
 import type { Derived } from "../derive";
@@ -57,6 +59,7 @@ export function checkLocalRules(d: Derived, c: Ctx, rules: RulesContext): LocalR
   const first =
     ev.findings.find((f) => f.status === "over") ??
     ev.findings.find((f) => f.status === "incomplete") ??
+    ev.findings.find((f) => f.status === "adjust") ??
     ev.findings.find((f) => f.status === "tight");
   result.message = first
     ? first.message
