@@ -40,7 +40,10 @@ const extraArb = fc.record({
 
 function build(t: Record<string, unknown>, x: Record<string, unknown>) {
   const clean = (o: Record<string, unknown>) => Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined));
-  return trailerRig("metric", clean(t), {
+  // A tongue weight above the gross trailer weight is no rig at all (a field error): keep it within.
+  const tw = t.tongueWeight as number | undefined;
+  const trailer = tw === undefined ? t : { ...t, tongueWeight: Math.min(tw, t.grossTrailerWeight as number) };
+  return trailerRig("metric", clean(trailer), {
     vehicle: clean({ gvwr: x.gvwr, curbWeight: x.curbWeight }),
     hitch: clean({ dValue: x.dValue, sValue: x.sValue }),
     ...(x.licence ? { driver: { licence: x.licence } } : {}),
