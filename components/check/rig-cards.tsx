@@ -378,7 +378,7 @@ export function TrailerFields({ tools }: { tools?: ReactNode }) {
       </FieldGroup>
       <FieldGroup title="Brakes and licence" note="What the rules where it is driven ask for: brakes, a breakaway device and the driver's licence.">
         <FieldGrid>
-          <ChoiceField name="trailer.brakes" label="Trailer brakes" emptyLabel="Not given" options={BRAKE_TYPES.map((b) => ({ value: b, label: BRAKE_LABELS[b] }))} />
+          <ChoiceField name="trailer.brakes" label="Trailer brakes" emptyLabel="Not given" options={BRAKE_TYPES.map((b) => ({ value: b, label: BRAKE_LABELS[b] }))} help={<TermHelp term="surge-brakes" question="What are surge brakes?">Electric brakes need a brake controller in the vehicle; surge brakes work from the trailer pushing on the ball.</TermHelp>} />
           <YesNoField name="trailer.brakesAllWheels" label="Brakes on every wheel" help="Look behind each wheel, or the trailer's papers." />
           <YesNoField name="trailer.breakaway" label="Breakaway device" help="Applies the trailer's brakes if it comes off the hitch ball." />
           <ChoiceField name="driver.licence" label="Driver's licence" emptyLabel="Not given" options={LICENCE_OPTIONS} help="Read by the licence rules where a place has them; not given means check the licence." />
@@ -392,7 +392,6 @@ export function TrailerFields({ tools }: { tools?: ReactNode }) {
           <ChoiceField name="trailer.ballSize" label="Ball size" emptyLabel="Not given" options={BALL_SIZES.map(inches)} help="Stamped on top of the ball." />
           <NumField name="trailer.ballRating" label="Ball rating" kind="mass" help="Stamped on top of the ball." />
           <NumField name="trailer.safetyChainRating" label="Safety chain rating (each)" kind="mass" help={<TermHelp term="safety-chains" question="What are safety chains?">Tag or stamp on each chain.</TermHelp>} />
-          <ChoiceField name="trailer.brakes" label="Trailer brakes" emptyLabel="Not given" options={BRAKE_TYPES.map((b) => ({ value: b, label: BRAKE_LABELS[b] }))} help={<TermHelp term="surge-brakes" question="What are surge brakes?">Electric brakes need a brake controller in the vehicle; surge brakes work from the trailer pushing on the ball.</TermHelp>} />
           <NumField name="trailer.couplingDValue" label="Coupler D value (marked)" kind="force" help="On the coupler's plate, in kN, where it is built to UN Regulation No. 55." />
         </FieldGrid>
       </FieldGroup>

@@ -53,7 +53,9 @@ function allSteps(): Step[] {
     }
   }
   // Every check family made steps somewhere in the corpus, so the symbol rule covers them all.
-  expect([...seen].sort()).toEqual([...CHECK_IDS].sort());
+  // The local-rules check runs only where a place is chosen and shows the rules' own words and sources
+  // (docs/local-rules.md); it makes no worked steps.
+  expect([...seen].sort()).toEqual(CHECK_IDS.filter((id) => id !== "local-rules").sort());
   const scale = tongueWeightByScale({ scaleReading: 250, units: "imperial" });
   const beam = tongueWeightByBeam({ scaleReading: 250, blockToJack: 12, jackToScale: 24, units: "imperial" });
   const publicScale = tongueWeightByPublicScale({ unhitched: { front: 3000, rear: 2500 }, hitched: { front: 2800, rear: 3300 }, units: "imperial" });
