@@ -54,12 +54,14 @@ async function signUpShop(page: Session["page"], shop: string, email: string) {
   await page.goto("/sign-up");
   await page.getByLabel("Your name").fill(`Owner of ${shop}`);
   await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(PASSWORD);
   await page.getByLabel("Shop or fleet name").fill(shop);
   await page.getByRole("button", { name: "Create my organisation" }).click();
   await page.getByText(`Check your inbox at ${email}`).waitFor();
   const mail = await latestMailTo(email);
   await page.goto(firstLink(mail.text, "/sign-up/confirm/"));
+  // The password is chosen on the page the confirmation link opens.
+  await page.getByLabel("Choose a password").fill(PASSWORD);
+  await page.getByLabel("The same again").fill(PASSWORD);
   await page.getByRole("button", { name: "Finish signing up" }).click();
   await page.waitForURL(/\/overview/);
 }

@@ -3,7 +3,7 @@ import { mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
-import { inject } from "vitest";
+import { expect, inject } from "vitest";
 import { CHROMIUM_PATH } from "./chromium";
 
 export const baseURL = () => inject("baseURL");
@@ -79,4 +79,21 @@ export function firstLink(text: string, pathPart: string): string {
   const match = text.match(new RegExp(`https?://[^\\s]*${pathPart}[^\\s]*`));
   if (!match) throw new Error(`No link containing ${pathPart} in:\n${text}`);
   return match[0];
+}
+
+/**
+ * Picks a saved profile on the check screen and waits for its "Filled from…" notice. A choice made before the
+ * workbench has hydrated is lost, so the pick is made again until the notice shows.
+ */
+export async function pickProfile(page: Page, label: string, choice: { label: string } | { index: number }) {
+  const notice = "label" in choice ? page.getByText(`Filled from the saved profile “${choice.label}”`) : page.getByText(/Filled from the saved profile/);
+  await expect
+    .poll(
+      async () => {
+        await page.getByLabel(label).selectOption(choice);
+        return notice.count();
+      },
+      { timeout: 30_000, interval: 500 },
+    )
+    .toBeGreaterThan(0);
 }
