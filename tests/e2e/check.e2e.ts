@@ -2,7 +2,7 @@ import { waitForHydration } from "./support/csp";
 import { createClient } from "@libsql/client";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { inject } from "vitest";
-import { DESKTOP, firstLink, latestMailTo, openBrowser, PHONE, pickProfile, screenshot, signIn } from "./support/browser";
+import { DESKTOP, firstLink, latestMailTo, openBrowser, PHONE, pickExample, pickProfile, screenshot, signIn } from "./support/browser";
 
 type Session = Awaited<ReturnType<typeof openBrowser>>;
 
@@ -176,7 +176,7 @@ describe("the quick check, signed out", () => {
       const { page } = session;
       const before = await countSavedChecks();
       await page.goto("/quick-check");
-      await page.getByLabel("Try an example").selectOption({ index: 1 });
+      await pickExample(page, { index: 1 });
       await expect.poll(() => page.getByTestId("verdict-level").first().getAttribute("data-level")).toMatch(/within|tight|adjust|over|incomplete/);
       expect(await page.getByRole("button", { name: "Save check" }).count()).toBe(0);
       await screenshot(page, "quick-check-phone");

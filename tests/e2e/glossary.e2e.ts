@@ -1,13 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { join } from "node:path";
 import type { Locator, Page } from "playwright-core";
-import { DESKTOP, openBrowser, PHONE, SCREENSHOT_DIR, screenshot, signIn } from "./support/browser";
+import { DESKTOP, openBrowser, PHONE, pickExample, screenshot, SCREENSHOT_DIR, signIn } from "./support/browser";
 
 /** Load the first example rig once the page is ready to take it. */
 async function loadExample(page: Page) {
   await expect
     .poll(async () => {
-      await page.getByLabel("Try an example").selectOption({ index: 1 });
+      await pickExample(page, { index: 1 });
       return page.getByText(/Example loaded:/).count();
     })
     .toBeGreaterThan(0);

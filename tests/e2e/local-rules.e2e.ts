@@ -4,7 +4,7 @@
  */
 import { describe, it } from "vitest";
 import { join } from "node:path";
-import { DESKTOP, firstLink, latestMailTo, openBrowser, PHONE, SCREENSHOT_DIR, screenshot, signIn } from "./support/browser";
+import { DESKTOP, firstLink, latestMailTo, openBrowser, PHONE, pickExample, screenshot, SCREENSHOT_DIR, signIn } from "./support/browser";
 
 type Session = Awaited<ReturnType<typeof openBrowser>>;
 
@@ -93,7 +93,7 @@ async function run(owner: Session, phone: Session, place: (typeof PLACES)[number
   await screenshot(page, `rules-settings-${place.name}`);
 
   await page.goto("/check");
-  await page.getByLabel("Try an example").selectOption({ label: "Small boat on a mid-size SUV (metric)" });
+  await pickExample(page, { label: "Small boat on a mid-size SUV (metric)" });
   const rules = page.getByTestId("applied-rules").first();
   await rules.getByRole("heading", { name: place.heading }).waitFor();
   await rules.locator(`[data-rule="${place.rule}"]`).getByText(`Source: ${place.source}`, { exact: false }).waitFor();
@@ -118,7 +118,7 @@ async function run(owner: Session, phone: Session, place: (typeof PLACES)[number
   // A phone at the same shop sees the same rules.
   await signIn(phone.page, place.email, PASSWORD);
   await phone.page.goto("/check");
-  await phone.page.getByLabel("Try an example").selectOption({ label: "Small boat on a mid-size SUV (metric)" });
+  await pickExample(phone.page, { label: "Small boat on a mid-size SUV (metric)" });
   await phone.page.getByRole("button", { name: /Checks/ }).first().click();
   await phone.page.getByTestId("applied-rules").first().getByRole("heading", { name: place.heading }).waitFor();
   await screenshot(phone.page, `rules-check-${place.name}-phone`);

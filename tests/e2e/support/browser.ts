@@ -97,3 +97,16 @@ export async function pickProfile(page: Page, label: string, choice: { label: st
     )
     .toBeGreaterThan(0);
 }
+
+/** Loads one of the check screen's example rigs and waits for its notice, choosing again until the screen takes it. */
+export async function pickExample(page: Page, choice: { label: string } | { index: number }) {
+  await expect
+    .poll(
+      async () => {
+        await page.getByLabel("Try an example").selectOption(choice);
+        return page.getByText(/^Example loaded: /).count();
+      },
+      { timeout: 30_000, interval: 500 },
+    )
+    .toBeGreaterThan(0);
+}
