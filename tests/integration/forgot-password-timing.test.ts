@@ -33,16 +33,17 @@ afterAll(async () => {
 describe("asking for a password reset", () => {
   it("answers a known address as fast as an unknown one: the mail leaves after the answer", async () => {
     const timed = async (email: string) => {
-      const started = performance.now();
       const state = await askForReset(initialFormState, form({ email }));
-      return { state, ms: performance.now() - started };
+      return { state };
     };
     await timed("warm-up@example.com");
     const unknown = await timed("nobody-known@example.com");
     const known = await timed("staffa@example.com");
     expect(known.state).toEqual(unknown.state);
-    // The relay never answers: waiting for it would take its whole timeout (many seconds).
-    expect(known.ms).toBeLessThan(1_000);
+    // The relay never answers. Had the answer waited for the mail, the mail client would have given up on the
+    // relay (and closed its connection) before answering; instead the mail is still waiting on an open
+    // connection after the answer is given: a state, not a time.
     await vi.waitFor(() => expect(sockets.length).toBeGreaterThan(0), { timeout: 5_000 });
+    expect(sockets.some((socket) => !socket.destroyed && !socket.readableEnded)).toBe(true);
   }, 15_000);
 });
