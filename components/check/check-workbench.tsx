@@ -5,7 +5,7 @@
  * recomputed in the browser on every keystroke that leaves the inputs valid. The core runs synchronously on
  * the parsed values; the last good verdict stays up, marked as waiting, while a field is invalid.
  */
-import { useCallback, useDeferredValue, useMemo, useRef, useState, type FormEvent } from "react";
+import { useCallback, useDeferredValue, useMemo, useLayoutEffect, useRef, useState, type FormEvent } from "react";
 import Link from "next/link";
 import { FormProvider, useForm, useWatch, type Control, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
@@ -119,9 +119,10 @@ function LiveVerdict({ control, kind, tightMarginRatio, place, onJump }: LivePro
     () => (parsed.ok ? { rig: parsed.rig, result: evaluateRig(parsed.rig, { tightMarginRatio, place: place ?? undefined }) } : null),
     [parsed, tightMarginRatio, place],
   );
-  const lastGood = useRef<{ rig: RigInput; result: RigResult } | null>(null);
-  if (evaluated) lastGood.current = evaluated;
-  const shown = evaluated ?? lastGood.current;
+  // While a figure is half-typed, the last rig that parsed stays on screen (kept as state, set while rendering).
+  const [lastGood, setLastGood] = useState<{ rig: RigInput; result: RigResult } | null>(null);
+  if (evaluated && evaluated !== lastGood) setLastGood(evaluated);
+  const shown = evaluated ?? lastGood;
   const [open, setOpen] = useState(false);
   // The drawing follows a moment after the verdict (a deferred render), so typing never waits for it.
   const deferredValues = useDeferredValue(values);
@@ -346,7 +347,9 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
   const [collapsed, setCollapsed] = useState<Record<CardId, boolean>>({ vehicle: false, hitch: false, hitched: false });
   const [filledFrom, setFilledFrom] = useState<string | null>(null);
   const kindRef = useRef(kind);
-  kindRef.current = kind;
+  useLayoutEffect(() => {
+    kindRef.current = kind;
+  }, [kind]);
 
   // The shared schema checks the values as the rig will be built from them (only the chosen hitched item,
   // blank groups left out), so a field's message matches what the verdict sees.

@@ -2,7 +2,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useMemo, useState, useTransition } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { Button, Card, CardBody, CardHeader, Field, FormMessage, NumberInput, Select, TextInput, useToast } from "@/components/ui";
 import { convertTypedFigure } from "@/components/check/rig-form";
 import { FIELDS_BY_KIND, KIND_WORDS, profileValueText, unitFor, type ProfileField, type ProfileKind } from "@/lib/fleet/fields";
@@ -55,7 +55,7 @@ export function ProfileForm({ kind, units: startUnits, profile, action }: Profil
   const { toast } = useToast();
   const [message, setMessage] = useState<string>();
   const [pending, startTransition] = useTransition();
-  const units = (form.watch("units") as "imperial" | "metric") ?? startUnits;
+  const units = (useWatch({ control: form.control, name: "units" }) as "imperial" | "metric") ?? startUnits;
   const fields = FIELDS_BY_KIND[kind];
   const groups = [...new Set(fields.map((field) => field.group))];
 

@@ -132,6 +132,7 @@ export function ProfilesTable({ kind, initial, canEdit, archiveAction }: Profile
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [kind, canEdit, data, archived]);
 
+  // eslint-disable-next-line react-hooks/incompatible-library -- the table's API is read fresh on each render here
   const table = useReactTable({
     data: data?.profiles ?? [],
     columns,

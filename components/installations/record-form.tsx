@@ -3,7 +3,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { Plus, Trash2 } from "lucide-react";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
-import { useFieldArray, useForm } from "react-hook-form";
+import { useFieldArray, useForm, useWatch } from "react-hook-form";
 import { Button, Card, CardBody, CardHeader, Field, FormMessage, NumberInput, Select, TextInput, Textarea, useToast } from "@/components/ui";
 import { DEFAULT_MEASURING_METHOD, MEASUREMENT_KEYS, MEASUREMENT_WORDS } from "@/lib/installations/words";
 import type { InstallationRecord } from "@/lib/server/installations";
@@ -98,8 +98,8 @@ export function RecordForm(props: RecordFormProps) {
   const { toast } = useToast();
   const [message, setMessage] = useState<string>();
   const [pending, startTransition] = useTransition();
-  const units = form.watch("units") as "imperial" | "metric";
-  const source = form.watch("vehicleSource") as "fleet" | "customer";
+  const units = useWatch({ control: form.control, name: "units" }) as "imperial" | "metric";
+  const source = useWatch({ control: form.control, name: "vehicleSource" }) as "fleet" | "customer";
   const wu = units === "metric" ? "kg" : "lb";
   const lu = units === "metric" ? "mm" : "in";
 

@@ -4,7 +4,7 @@
  * JSON. Every change writes the rig, as the evaluate format's JSON, into the lesson form's `rig` field, which
  * the server parses and checks again.
  */
-import { useEffect, useMemo, useRef, useState } from "react";
+import { useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
 import { FormProvider, useForm, useWatch, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { Button, Field, Textarea, cn } from "@/components/ui";
@@ -38,7 +38,9 @@ export function LessonRigEditor({ initialJson, onChange }: LessonRigEditorProps)
   const [pasted, setPasted] = useState("");
   const [pasteError, setPasteError] = useState<string>();
   const kindRef = useRef(kind);
-  kindRef.current = kind;
+  useLayoutEffect(() => {
+    kindRef.current = kind;
+  }, [kind]);
 
   // The same schema as the check screen, on the rig as it will be built (the chosen hitched item only).
   const resolver = useMemo<Resolver<RigFormValues, unknown, RigInput>>(() => {

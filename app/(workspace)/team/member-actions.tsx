@@ -52,9 +52,13 @@ export function RemoveMember({ membershipId, name }: { membershipId: string; nam
   const [open, setOpen] = useState(false);
   const [state, formAction, pending] = useActionState(remove, initialFormState);
   useAnnounce(state);
-  useEffect(() => {
+  // A finished removal closes the dialog: adjusted while rendering, the way React suggests for state that follows
+  // another state, rather than in an effect that would draw the open dialog once more.
+  const [handled, setHandled] = useState(state);
+  if (state !== handled) {
+    setHandled(state);
     if (state.message) setOpen(false);
-  }, [state]);
+  }
   return (
     <>
       <Button size="sm" variant="quiet" onClick={() => setOpen(true)}>

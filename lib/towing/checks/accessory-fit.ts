@@ -212,7 +212,11 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
   for (const p of parts) {
     if (!p.margin) continue;
     const r = rankOf(p.status);
-    if (r > govRank || (r === govRank && lessThan(p.margin.ratio, best))) (govRank = r), (best = p.margin.ratio), (gov = p);
+    if (r > govRank || (r === govRank && lessThan(p.margin.ratio, best))) {
+      govRank = r;
+      best = p.margin.ratio;
+      gov = p;
+    }
   }
   const result: AccessoryFitResult = {
     id: "accessory-fit",

@@ -6,7 +6,7 @@
  *   s_min · G ≤ T ≤ s_max · G (the tongue-weight band).
  * Physics: the region is the intersection of half-planes; its corners are found in closed form.
  */
-import { EPS, fP, fW, iL, iN, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, rankOf, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
+import { EPS, fP, fW, iN, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, rankOf, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
 import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
 import { need } from "../missing";
 import type { CheckStatus, EnvelopeLine, EnvelopeResult, MissingField, Step } from "../types";
@@ -108,8 +108,14 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
   let gBound: Bound | undefined;
   let tBound: Bound | undefined;
   for (const b of bounds) {
-    if (b.on === "G" && lessThan(b.value, gMax)) (gMax = b.value), (gBound = b);
-    if (b.on === "T" && lessThan(b.value, tMax)) (tMax = b.value), (tBound = b);
+    if (b.on === "G" && lessThan(b.value, gMax)) {
+      gMax = b.value;
+      gBound = b;
+    }
+    if (b.on === "T" && lessThan(b.value, tMax)) {
+      tMax = b.value;
+      tBound = b;
+    }
   }
   const lo = band.min;
   const hi = band.max;
@@ -153,7 +159,10 @@ export function checkEnvelope(d: Derived, c: Ctx): EnvelopeResult | null {
     let gAt = Infinity;
     for (const b of bounds) {
       const g = b.on === "G" ? b.value : b.value / share;
-      if (lessThan(g, gAt)) (gAt = g), (bind = b);
+      if (lessThan(g, gAt)) {
+        gAt = g;
+        bind = b;
+      }
     }
     if (bind) result.binding = { id: bind.id, label: bind.label, value: bind.value * wf, unit: c.u.weight };
     if (Number.isFinite(gAt)) atShare = { share, g: Math.max(0, gAt), own: d.gtw !== undefined && d.tw !== undefined && d.gtw > 0 && d.tw > 0 };
