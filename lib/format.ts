@@ -54,3 +54,27 @@ export function formatChange(quantity: Quantity): string {
   const sign = quantity.value > 0 ? "+" : "";
   return `${sign}${formatQuantity(quantity)}`;
 }
+
+/** The words a saved check's vehicle label falls back to when the vehicle was typed in, not named. */
+const UNNAMED_VEHICLES = new Set(["Typed vehicle", ""]);
+
+/**
+ * A saved check's title: the customer it was saved for, then the rig ("Dana Whitlock: platform rack on a
+ * Harrow pickup"). Without a customer, the rig alone. A vehicle typed in without a name reads "their vehicle"
+ * for a customer and "a vehicle typed in" otherwise, never the stored fallback label.
+ */
+export function savedCheckTitle(check: { customerName?: string | null; vehicleLabel?: string | null; hitchedLabel?: string | null }): string {
+  const customer = check.customerName?.trim();
+  const vehicle = check.vehicleLabel?.trim() ?? "";
+  const hitched = check.hitchedLabel?.trim() || "Nothing hitched";
+  const named = !UNNAMED_VEHICLES.has(vehicle);
+  const on = named ? vehicle : customer ? "their vehicle" : "a vehicle typed in";
+  if (customer) return `${customer}: ${lowerFirst(hitched)} on ${on}`;
+  return `${hitched} on ${on}`;
+}
+
+/** "Platform rack" → "platform rack"; a leading acronym ("GVWR…") keeps its capitals. */
+function lowerFirst(text: string): string {
+  if (/^[A-Z]{2}/.test(text)) return text;
+  return text.charAt(0).toLowerCase() + text.slice(1);
+}

@@ -10,6 +10,8 @@ import dynamic from "next/dynamic";
 import { ChevronRight } from "lucide-react";
 import { VerdictBadge, cn, levelMeaning, levelWords } from "@/components/ui";
 import { formatMargin, formatQuantity, formatRatio } from "@/lib/format";
+import { checkFigureWords, partWords } from "@/components/report/part-words";
+import { stillToMeasure } from "@/lib/still-to-measure";
 import type {
   AccessoryFitResult,
   AnyCheckResult,
@@ -54,12 +56,13 @@ function ActualVsLimit({ check }: { check: AnyCheckResult }) {
   if (!check.actual || !check.limit) return null;
   const isShare = check.id === "tongue-share";
   const isAngle = check.id === "accessory-fit" && check.actual.unit === "°";
+  const room = checkFigureWords(check);
   return (
     <p className="num text-sm text-ink">
-      {isShare ? "Share " : isAngle ? "Departure angle " : "On it "}
+      {isShare ? "Share " : isAngle ? "Departure angle " : room ? `${room.actual} ` : "On it "}
       <strong className="font-semibold">{formatQuantity(check.actual)}</strong>
       <span className="text-ink-soft">
-        {isShare ? " · nearest edge " : isAngle ? " · accessory angle " : " · allowed "}
+        {isShare ? " · nearest edge " : isAngle ? " · accessory angle " : room ? ` · ${room.limit} ` : " · allowed "}
         {formatQuantity(check.limit)}
       </span>
     </p>
@@ -116,9 +119,10 @@ function PartsTable({ check }: { check: AccessoryFitResult }) {
           <span className="font-medium text-ink">{part.label}</span>
           {part.actual && part.limit ? (
             <span className="num text-ink-soft">
-              {formatQuantity(part.actual)} · {formatQuantity(part.limit)} · {formatMargin(part.margin)}
+              {partWords(part.id).actual.toLowerCase()} {formatQuantity(part.actual)} · {partWords(part.id).limit} {formatQuantity(part.limit)} · {formatMargin(part.margin)} room
             </span>
           ) : null}
+          {part.waitingFor ? <span className="basis-full pl-1 text-ink-soft">Still needs: {part.waitingFor.charAt(0).toLowerCase() + part.waitingFor.slice(1)}.</span> : null}
         </li>
       ))}
     </ul>
@@ -177,17 +181,13 @@ function CheckRow({ check }: { check: AnyCheckResult }) {
         </div>
       ) : null}
       {check.missing?.length ? (
-        <div className="rounded-md border border-dashed border-unknown/50 bg-unknown-soft px-3 py-2">
-          <p className="text-[0.8125rem] font-semibold text-ink">Still to measure</p>
-          <ul className="mt-1 space-y-1 text-sm leading-snug">
-            {check.missing.map((m) => (
-              <li key={m.field}>
-                <span className="text-ink">{m.what}</span>
-                <span className="text-ink-soft"> — {m.where}</span>
-              </li>
-            ))}
-          </ul>
-        </div>
+        <p data-testid="waits-for" className="text-[0.8125rem] text-ink-soft">
+          {check.status === "incomplete" ? "Waits for" : "Would be firmer with"} {check.missing.length === 1 ? "one figure" : `${check.missing.length} figures`} from{" "}
+          <a href="#verdict-to-measure" className="text-accent-strong underline underline-offset-2">
+            Still to measure
+          </a>
+          .
+        </p>
       ) : null}
       <LazyDetails
         summary={
@@ -249,6 +249,8 @@ function VerdictPanelImpl({ result, rig, charts = true, className, headingLevel 
   const Heading = headingLevel;
   const governingCheck = verdict.governing ? result.checks.find((c) => c.id === verdict.governing!.checkId) : undefined;
   const incompleteTitles = verdict.incomplete.map((id) => result.checks.find((c) => c.id === id)?.title ?? id);
+  const toMeasure = stillToMeasure(result.checks);
+  const titleOf = (id: string) => result.checks.find((c) => c.id === id)?.title ?? id;
 
   // Stamped on every new result, straight onto the element, so a browser test can read input → verdict time.
   useLayoutEffect(() => {
@@ -292,6 +294,24 @@ function VerdictPanelImpl({ result, rig, charts = true, className, headingLevel 
         ) : null}
         <p className="text-xs text-ink-faint">Tight means less than {formatRatio(verdict.tightMarginRatio, 0)} of a limit left.</p>
       </header>
+
+      {toMeasure.length ? (
+        <section aria-labelledby="verdict-to-measure-title" id="verdict-to-measure" data-testid="still-to-measure" className="scroll-mt-24 rounded-md border border-dashed border-unknown/50 bg-unknown-soft px-3 py-2.5">
+          <h3 id="verdict-to-measure-title" className="text-sm font-semibold text-ink">
+            Still to measure ({toMeasure.length})
+          </h3>
+          <p className="text-xs text-ink-soft">Each figure once, in the order you would gather them.</p>
+          <ol className="mt-1.5 list-decimal space-y-1 pl-5 text-sm leading-snug">
+            {toMeasure.map((m) => (
+              <li key={m.field} data-field={m.field}>
+                <span className="text-ink">{m.what}</span>
+                <span className="text-ink-soft"> — {m.where}</span>
+                <span className="block text-xs text-ink-faint">For: {m.checks.map(titleOf).join(" · ")}</span>
+              </li>
+            ))}
+          </ol>
+        </section>
+      ) : null}
 
       <ol aria-label="Checks" className="divide-y divide-rule border-y border-rule">
         {result.checks.map((check) => (

@@ -10,6 +10,7 @@ import { listChecks } from "@/lib/server/checks";
 import { fleetMatrix } from "@/lib/server/fleet";
 import { listTeam } from "@/lib/server/team";
 import { listCourses, listResults } from "@/lib/server/training";
+import { savedCheckTitle } from "@/lib/format";
 
 const dayMonth = (iso: string) => new Date(iso).toLocaleDateString("en-GB", { day: "numeric", month: "short", timeZone: "UTC" });
 
@@ -30,8 +31,7 @@ export async function RecentChecks({ access }: { access: AccessContext }) {
               <li key={row.id} className="flex flex-wrap items-center gap-x-3 gap-y-1 py-2.5">
                 <VerdictBadge status={row.level} size="sm" />
                 <Link href={`/checks/${row.id}`} className="min-w-0 flex-1 font-medium text-ink underline-offset-2 hover:underline">
-                  {row.customerName ? `${row.customerName}: ` : ""}
-                  {[row.vehicleLabel, row.hitchedLabel].filter(Boolean).join(" with ") || "A rig"}
+                  {savedCheckTitle(row)}
                 </Link>
                 <span className="num text-sm text-ink-soft">{dayMonth(row.createdAt)}</span>
               </li>

@@ -8,7 +8,9 @@ import type { AccessoryFitResult, AnyCheckResult, CheckId, Link, TongueShareResu
 import { VerdictBadge, verdictWords } from "@/components/ui/verdict-badge";
 import { cn } from "@/components/ui/cn";
 import { CHECK_WORDS } from "@/lib/glossary";
-import { checkMeaning } from "./meaning";
+import { carriedWords, checkMeaning } from "./meaning";
+import { checkFigureWords, partWords } from "./part-words";
+import { ownAdvice } from "@/lib/still-to-measure";
 import { bandEdge } from "./tongue-share-chart";
 
 /** What the measured side of each check is, in words. */
@@ -59,10 +61,11 @@ function Figures({ check }: { check: AnyCheckResult }) {
   }
   if (!check.actual && !check.limit) return null;
   const limitNote = check.governing && check.limit ? check.governing.label : undefined;
+  const room = checkFigureWords(check);
   return (
     <dl className="mt-2 flex flex-wrap gap-x-6 gap-y-1 print:mt-0 print:gap-x-2.5 print:gap-y-0">
       {check.actual ? (
-        <Figure term={ACTUAL_LABEL[check.id] ?? "This rig"} strong>
+        <Figure term={room ? "Room it needs" : (ACTUAL_LABEL[check.id] ?? "This rig")} strong>
           {formatQuantity(check.actual)}
         </Figure>
       ) : null}
@@ -70,7 +73,8 @@ function Figures({ check }: { check: AnyCheckResult }) {
         <Figure
           term={
             <>
-              Limit{limitNote ? <span className="print:hidden">: {limitNote}</span> : null}
+              {room ? "Room it has" : "Limit"}
+              {limitNote ? <span className="print:hidden">: {limitNote}</span> : null}
             </>
           }
         >
@@ -144,10 +148,11 @@ function PartList({ check }: { check: AccessoryFitResult }) {
             {part.label}
             {part.actual && part.limit ? (
               <span className="num block text-xs text-ink-soft tabular-nums print:inline print:pl-1">
-                {formatQuantity(part.actual)} against {formatQuantity(part.limit)}
+                {partWords(part.id).actual.toLowerCase()} {formatQuantity(part.actual)}, {partWords(part.id).limit} {formatQuantity(part.limit)}
                 {part.margin ? ` · room left ${formatMargin(part.margin)}` : ""}
               </span>
             ) : null}
+            {part.waitingFor ? <span className="block text-xs text-ink-soft">Still needs: {part.waitingFor.charAt(0).toLowerCase() + part.waitingFor.slice(1)}.</span> : null}
           </span>
           <VerdictBadge status={part.status} size="sm" />
         </li>
@@ -173,17 +178,16 @@ export function printedLines(check: AnyCheckResult): number {
     ].join("   ");
     total += lines(figures, 64);
   }
-  for (const advice of check.advice) total += lines(advice, 56);
-  if (check.status === "incomplete" && check.missing?.length) {
-    total += 1;
-    for (const item of check.missing) total += lines(`${item.what} (${item.where})`, 58);
-  }
+  for (const advice of ownAdvice(check)) total += lines(advice, 56);
+  if (check.missing?.length) total += 1;
   if (check.estimated) total += 1;
   return total;
 }
 
-export function CheckItem({ check, columnBreak = false }: { check: AnyCheckResult; columnBreak?: boolean }) {
+export function CheckItem({ check, columnBreak = false, carried = false }: { check: AnyCheckResult; columnBreak?: boolean; carried?: boolean }) {
   const words = CHECK_WORDS[check.id] ?? { title: check.title, line: "" };
+  const advice = ownAdvice(check);
+  const say = carried ? carriedWords : (text: string) => text;
   const headingId = `report-check-${check.id}`;
   const problem = check.status === "over" || check.status === "adjust" || check.status === "tight";
   return (
@@ -208,7 +212,7 @@ export function CheckItem({ check, columnBreak = false }: { check: AnyCheckResul
       <p className="mt-2 text-[0.9375rem] leading-snug print:mt-0 print:text-[8pt] print:leading-[1.3]">{check.message}</p>
       {problem ? (
         <p data-testid="finding-meaning" className="mt-1 text-sm leading-snug font-medium print:mt-0 print:text-[7.5pt]">
-          {checkMeaning(check)}
+          {say(checkMeaning(check))}
         </p>
       ) : null}
       <Figures check={check} />
@@ -217,19 +221,13 @@ export function CheckItem({ check, columnBreak = false }: { check: AnyCheckResul
       {check.estimated ? (
         <p className="mt-2 text-xs text-ink-soft print:text-[7.5pt]">One figure here is an estimate, not a weighed or measured value.</p>
       ) : null}
-      {check.status === "incomplete" && check.missing?.length ? (
-        <div className="mt-2 print:mt-0.5">
-          <h4 className="text-sm font-semibold print:text-[8pt]">Figures still needed</h4>
-          <ul className="mt-1 list-disc space-y-0.5 pl-5 text-sm print:mt-0 print:space-y-0 print:pl-3.5 print:text-[7.5pt]">
-            {check.missing.map((item) => (
-              <li key={item.field}>
-                {item.what} <span className="text-ink-soft">({item.where})</span>
-              </li>
-            ))}
-          </ul>
-        </div>
+      {check.missing?.length ? (
+        <p data-testid="waits-for" className="mt-2 text-sm text-ink-soft print:mt-0.5 print:text-[7.5pt]">
+          {check.status === "incomplete" ? "Waits for" : "Would be firmer with"} {check.missing.length === 1 ? "one figure" : `${check.missing.length} figures`} from
+          the list under “Still to measure”.
+        </p>
       ) : null}
-      {check.advice.length ? (
+      {advice.length ? (
         <div
           className={cn(
             "mt-3 rounded-md border-l-4 bg-sunken px-3 py-2 print:mt-0.5 print:rounded-none print:border-l-2 print:bg-transparent print:px-2 print:py-0",
@@ -237,12 +235,12 @@ export function CheckItem({ check, columnBreak = false }: { check: AnyCheckResul
           )}
         >
           <h4 className="text-sm font-semibold print:float-left print:mr-1 print:text-[7.5pt] print:leading-[1.3]">
-            {check.status === "adjust" ? "Adjust before you tow" : problem ? "What to do" : "Next step"}
+            {check.status === "adjust" ? say("Adjust before you tow") : problem ? "What to do" : "Next step"}
             <span className="hidden print:inline">:</span>
           </h4>
           <ul className="mt-0.5 space-y-0.5 text-sm print:mt-0 print:space-y-0 print:text-[7.5pt] print:leading-[1.3]">
-            {check.advice.map((advice) => (
-              <li key={advice}>{advice}</li>
+            {advice.map((line) => (
+              <li key={line}>{say(line)}</li>
             ))}
           </ul>
         </div>

@@ -37,3 +37,16 @@ export function checkMeaning(check: AnyCheckResult): string {
   if (key === "adjust") return ADJUST_WORDS[check.id] ?? STATUS_MEANING.adjust.check;
   return STATUS_MEANING[key].check;
 }
+
+/**
+ * The page's towing words, said for a rack or carrier, which is carried, not towed. Applied to the report's own
+ * sentences (headings, meanings, advice) when nothing is towed.
+ */
+export function carriedWords(text: string): string {
+  return text
+    .replace(/do not tow like this/g, "do not drive with it loaded like this")
+    .replace(/before you tow/g, "before you drive")
+    .replace(/Before you tow/g, "Before you drive")
+    .replace(/before towing/g, "before driving")
+    .replace(/Towing check/g, "Hitch load check");
+}

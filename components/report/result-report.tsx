@@ -12,7 +12,8 @@ import { VerdictBadge, levelWords } from "@/components/ui/verdict-badge";
 import { CheckItem, printedLines } from "./check-item";
 import { CHECK_WORDS, plainTitle, STATUS_MEANING, termsIn } from "@/lib/glossary";
 import { GlossaryList } from "@/components/glossary/glossary-list";
-import { verdictMeaningKey } from "./meaning";
+import { carriedWords, verdictMeaningKey } from "./meaning";
+import { stillToMeasure } from "@/lib/still-to-measure";
 import { PrintButton } from "./print-button";
 import { reportFigures } from "./report-charts";
 import { describeRig, listWords } from "./rig-summary";
@@ -131,6 +132,10 @@ export function ResultReport({ shopName, createdAt, customerName, rig, result, q
   const split = columnSplit(checks);
   const figures = reportFigures(result, rig);
   const missingTitles = verdict.incomplete.map(plainTitle);
+  const toMeasure = stillToMeasure(result.checks);
+  // A rack or carrier is carried, not towed: the page's own words say so.
+  const carried = Boolean(rig.accessory && !rig.trailer);
+  const say = (text: string) => (carried ? carriedWords(words(text)) : words(text));
   // Results saved before the set-up status carry no `adjust` list.
   const adjustTitles = (verdict.adjust ?? []).map(plainTitle);
 
@@ -146,14 +151,14 @@ export function ResultReport({ shopName, createdAt, customerName, rig, result, q
       <header className="flex items-start justify-between gap-4 border-b border-rule pb-4 print:pb-1">
         <div className="min-w-0 print:flex print:flex-1 print:items-end print:justify-between print:gap-6">
           <div className="min-w-0">
-            <p className="text-xs font-medium tracking-wide text-ink-faint uppercase print:hidden">Towing check</p>
+            <p className="text-xs font-medium tracking-wide text-ink-faint uppercase print:hidden">{say("Towing check")}</p>
             <h1 id="report-title" className="mt-0.5 text-xl leading-tight font-semibold break-words sm:text-2xl print:text-[13pt]">
               {shopName}
             </h1>
           </div>
           <div className="mt-1 text-sm text-ink-soft print:mt-0 print:text-right print:text-[8pt]">
             <p>
-              <span className="hidden print:inline">Towing check · </span>
+              <span className="hidden print:inline">{say("Towing check")} · </span>
               Checked on <time dateTime={createdAt.toISOString()}>{date}</time>
             </p>
             {customerName ? <p>Prepared for {customerName}</p> : null}
@@ -173,10 +178,10 @@ export function ResultReport({ shopName, createdAt, customerName, rig, result, q
           <VerdictBadge status={verdict.level} label={levelWords[verdict.level]} size="lg" className="print:h-7 print:text-[9pt]" />
           <p className="text-xl leading-snug font-semibold text-balance sm:text-2xl print:text-[11pt]">{verdictSentence(verdict)}</p>
         </div>
-        <p className="mt-2 text-[0.9375rem] text-ink-soft print:mt-0.5 print:text-[8.5pt]">{levelMeaning(verdict)}</p>
+        <p className="mt-2 text-[0.9375rem] text-ink-soft print:mt-0.5 print:text-[8.5pt]">{say(levelMeaning(verdict))}</p>
         {adjustTitles.length && verdict.level !== "adjust" ? (
           <p className="mt-2 text-[0.9375rem] print:mt-0.5 print:text-[8.5pt]">
-            The set-up also needs adjusting before you tow: {listWords(adjustTitles.map((title) => title.toLowerCase()))}.
+            {say("The set-up also needs adjusting before you tow")}: {listWords(adjustTitles.map((title) => title.toLowerCase()))}.
           </p>
         ) : null}
         {!verdict.complete && missingTitles.length ? (
@@ -187,6 +192,23 @@ export function ResultReport({ shopName, createdAt, customerName, rig, result, q
           </p>
         ) : null}
       </section>
+
+      {toMeasure.length ? (
+        <section aria-labelledby="report-to-measure" className="mt-6 print:mt-1.5">
+          <h2 id="report-to-measure" className={H2}>
+            Still to measure
+          </h2>
+          <p className="mt-1 text-sm text-ink-soft print:hidden">Each figure once, in the order you would gather them; the checks that wait for it in brackets.</p>
+          <ol className="mt-2 list-decimal space-y-1 pl-5 text-[0.9375rem] print:mt-0.5 print:space-y-0 print:columns-2 print:text-[7.5pt]">
+            {toMeasure.map((item) => (
+              <li key={item.field} data-field={item.field}>
+                {item.what}. <span className="text-ink-soft">{item.where}.</span>{" "}
+                <span className="text-ink-faint">({listWords(item.checks.map((id) => plainTitle(id).toLowerCase()))})</span>
+              </li>
+            ))}
+          </ol>
+        </section>
+      ) : null}
 
       <section aria-labelledby="report-rig" className="mt-6 print:mt-1.5">
         <h2 id="report-rig" className={H2}>
@@ -201,7 +223,7 @@ export function ResultReport({ shopName, createdAt, customerName, rig, result, q
         </h2>
         <ul className="mt-2 grid gap-3 print:mt-0.5 print:block print:columns-2 print:gap-x-5">
           {checks.map((check, index) => (
-            <CheckItem key={check.id} check={check} columnBreak={index === split && index > 0} />
+            <CheckItem key={check.id} check={check} carried={carried} columnBreak={index === split && index > 0} />
           ))}
         </ul>
       </section>
@@ -238,7 +260,7 @@ export function ResultReport({ shopName, createdAt, customerName, rig, result, q
 
         <section aria-labelledby="report-cautions" className="mt-6 print:mt-0 print:min-w-0">
           <h2 id="report-cautions" className={H2}>
-            Before you tow
+            {say("Before you tow")}
           </h2>
           <ul className="mt-2 list-disc space-y-1 pl-5 text-[0.9375rem] print:mt-0.5 print:space-y-0.5 print:pl-4 print:text-[7.5pt]">
             {cautions.map((caution) => (

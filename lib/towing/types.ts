@@ -166,7 +166,8 @@ export interface BallMountResult extends CheckResult {
 
 export interface AccessoryFitResult extends CheckResult {
   id: "accessory-fit";
-  parts: Array<{ id: string; label: string; status: CheckStatus; actual?: Quantity; limit?: Quantity; margin?: Margin }>;
+  /** Each part of the fit. `waitingFor`: what a part checked in part still needs, in words (e.g. the load's distance for its lever effect). */
+  parts: Array<{ id: string; label: string; status: CheckStatus; actual?: Quantity; limit?: Quantity; margin?: Margin; waitingFor?: string }>;
   accessoryAngle?: Quantity;
   groundClearance?: Quantity;
   shankRiseNeeded?: Quantity;

@@ -59,31 +59,36 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
   for (const l of limits) if (!low || lessThan(l[2], low[2])) low = l;
   const loadPart: Part = { id: "load", label: "Load on the receiver", status: "incomplete" };
   let leverBeyond = false;
-  if (d.hitchLoad !== undefined && a.loadCenterFromPin !== undefined) {
+  // The load is checked against the ratings as soon as it and one rating are known; the lever effect (a
+  // convention) waits for the load's distance, and while it waits the part can still read over, never within
+  // on its own: the distance stays on the missing list, so the check stays unconfirmed.
+  if (d.hitchLoad !== undefined) {
     const w = d.hitchLoad;
-    const arm = a.loadCenterFromPin + ext;
-    const factor = Math.max(1, arm / c.referenceArm);
-    const eq = w * factor;
+    const arm = a.loadCenterFromPin !== undefined ? a.loadCenterFromPin + ext : undefined;
+    const factor = arm !== undefined ? Math.max(1, arm / c.referenceArm) : undefined;
+    const eq = factor !== undefined ? w * factor : undefined;
     loadPart.actual = qW(c, w);
+    if (eq === undefined) loadPart.waitingFor = "The distance from the pin hole to the load's centre, to weigh how hard the load levers on the hitch";
     if (low) {
       // The ratings decide "over" on the load itself. The lever effect is a convention (the reference arm has no
       // published source): beyond the vehicle's or hitch's rating it makes the part tight, never over.
       loadPart.limit = qW(c, low[2]);
       loadPart.margin = marginW(c, w, low[2]);
       const byRating = statusOf(w, low[2], c.tight);
-      const byLever = lowVh ? statusOf(eq, lowVh[2], c.tight, "tight") : "within";
-      loadPart.status = worst([byRating, byLever]);
-      leverBeyond = byRating !== "over" && !!lowVh && eq > lowVh[2] * (1 + 1e-9);
+      const byLever = lowVh && eq !== undefined ? statusOf(eq, lowVh[2], c.tight, "tight") : "within";
+      loadPart.status = eq === undefined ? worst([byRating, "incomplete"]) : worst([byRating, byLever]);
+      leverBeyond = byRating !== "over" && !!lowVh && eq !== undefined && eq > lowVh[2] * (1 + 1e-9);
     }
     if (detail)
+      steps.push({ id: "accessory-weight", title: "Weight on the receiver", formulaWords: "Accessory weight plus the load it carries", formula: "W_rack + W_load", inputs: [iW(c, "W_rack", "Accessory", a.weight!), iW(c, "W_load", "Its load", a.loadWeight!)], result: rW(c, "W", w) });
+    if (detail && factor !== undefined && eq !== undefined)
       steps.push(
-        { id: "accessory-weight", title: "Weight on the receiver", formulaWords: "Accessory weight plus the load it carries", formula: "W_rack + W_load", inputs: [iW(c, "W_rack", "Accessory", a.weight!), iW(c, "W_load", "Its load", a.loadWeight!)], result: rW(c, "W", w) },
         {
           id: "accessory-lever",
           title: "Lever effect of the load's distance",
           formulaWords: "Distance from the pin to the load's centre, plus the extender, over the reference arm (never less than 1)",
           formula: "max(1, (d + e) / d_ref)",
-          inputs: [iL(c, "d", "Pin to the load's centre", a.loadCenterFromPin), iL(c, "e", "Extender", ext), iL(c, "d_ref", "Reference arm for the rating", c.referenceArm)],
+          inputs: [iL(c, "d", "Pin to the load's centre", a.loadCenterFromPin!), iL(c, "e", "Extender", ext), iL(c, "d_ref", "Reference arm for the rating", c.referenceArm)],
           result: rN("k", factor, ""),
           note: "The reference arm is common practice, not a published figure; the moment about the pin is physics.",
         },
@@ -98,7 +103,7 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
         inputs: [...limits.map((l, i) => iW(c, `T_${i + 1}`, l[1], l[2])), iW(c, "W", "Weight on the receiver", w)],
         result: rW(c, "M_T", low[2] - w),
       });
-    if (detail && lowVh)
+    if (detail && lowVh && eq !== undefined)
       steps.push({
         id: "accessory-lever-allowance",
         title: "Room left for the lever effect",

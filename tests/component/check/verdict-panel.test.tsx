@@ -108,9 +108,13 @@ describe("VerdictPanel", () => {
     const row = screen.getByTestId("check-combined-weight");
     expect(row.getAttribute("data-status")).toBe("incomplete");
     expect(within(row).getByText("Not enough data")).toBeTruthy();
-    const box = within(row).getByText("Still to measure").parentElement!;
-    expect(box.textContent).toContain("The gross combined weight rating (GCWR)");
-    expect(box.textContent).toContain("Owner's manual, towing section");
+    // The row points to the one list above the checks, which names the figure and where to find it, once.
+    expect(within(row).getByTestId("waits-for").textContent).toMatch(/Waits for one figure/);
+    const list = screen.getByTestId("still-to-measure");
+    const item = list.querySelector('[data-field="vehicle.gcwr"]')!;
+    expect(item.textContent).toContain("The gross combined weight rating (GCWR)");
+    expect(item.textContent).toContain("Owner's manual, towing section");
+    expect(list.querySelectorAll('[data-field="vehicle.gcwr"]')).toHaveLength(1);
   });
 
   it("shows the cautions", () => {

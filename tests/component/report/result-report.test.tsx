@@ -141,11 +141,11 @@ describe("ResultReport header and verdict", () => {
     const verdict = screen.getByRole("region", { name: "Verdict" });
     expect(verdict.querySelector('[data-status="adjust"]')?.textContent).toBe("Adjust the set-up");
     expect(
-      within(verdict).getByText("Set-up to adjust. No rating is exceeded, but the set-up needs adjusting before you tow. See what to do under each check."),
+      within(verdict).getByText("Set-up to adjust. No rating is exceeded, but the set-up needs adjusting before you drive. See what to do under each check."),
     ).toBeTruthy();
     expect(verdict.textContent).not.toMatch(/Rating exceeded|do not tow like this/);
     const item = checkItem(CHECK_WORDS["accessory-fit"].title);
-    expect(within(item).getByRole("heading", { level: 4, name: /^Adjust before you tow/ })).toBeTruthy();
+    expect(within(item).getByRole("heading", { level: 4, name: /^Adjust before you drive/ })).toBeTruthy();
     expect(within(item).getByTestId("finding-meaning").textContent).toMatch(/needs a different set-up before you drive/);
   });
 
@@ -194,8 +194,25 @@ describe("ResultReport header and verdict", () => {
     expect(verdict.textContent).toMatch(/could not be done because figures are missing: .*vehicle and trailer together/);
     const item = checkItem(CHECK_WORDS["combined-weight"].title);
     expect(within(item).getByText("Not enough data")).toBeTruthy();
-    expect(within(item).getByText("Figures still needed")).toBeTruthy();
-    expect(item.textContent).toContain("(GCWR)");
+    // The check points to the one list; the figure itself is named there, once.
+    expect(within(item).getByTestId("waits-for").textContent).toMatch(/Waits for one figure/);
+    expect(item.textContent).not.toContain("(GCWR)");
+    const list = screen.getByRole("region", { name: "Still to measure" });
+    expect(list.querySelectorAll('[data-field="vehicle.gcwr"]')).toHaveLength(1);
+    expect(list.textContent).toContain("(GCWR)");
+  });
+
+  it("lists each missing figure once on the page, not under each check again", () => {
+    renderReport(variant("camper-on-pickup", { "vehicle.gcwr": undefined, "vehicle.wheelbase": undefined }));
+    const page = document.body.textContent ?? "";
+    const wheelbase = "The wheelbase, front axle centre to rear axle centre";
+    expect(page.split(wheelbase).length - 1).toBe(1);
+  });
+
+  it("speaks of driving, not towing, on a rack's page", () => {
+    renderReport(fixture("bike-rack-on-small-car"));
+    expect(screen.getByRole("region", { name: /Before you drive/ })).toBeTruthy();
+    expect(document.body.textContent).not.toMatch(/before you tow/i);
   });
 });
 
@@ -256,7 +273,7 @@ describe("ResultReport rig and checks", () => {
     renderReport(fixture("bike-rack-on-small-car"));
     const item = checkItem(CHECK_WORDS["accessory-fit"].title);
     expect(item.getAttribute("data-status")).toBe("adjust");
-    const advice = within(item).getByRole("heading", { level: 4, name: /^Adjust before you tow/ }).parentElement!;
+    const advice = within(item).getByRole("heading", { level: 4, name: /^Adjust before you drive/ }).parentElement!;
     expect(advice.textContent).toContain("shank rise");
     // Problems come first in the list.
     const first = within(screen.getByRole("region", { name: "Each check" })).getAllByRole("heading", { level: 3 })[0];

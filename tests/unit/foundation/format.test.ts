@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { formatMargin, formatNumber, formatQuantity, formatRatio } from "@/lib/format";
+import { formatMargin, formatNumber, formatQuantity, formatRatio, savedCheckTitle } from "@/lib/format";
 
 describe("display rounding", () => {
   it("rounds weights to whole units with separators and lengths to tenths", () => {
@@ -18,5 +18,21 @@ describe("display rounding", () => {
   it("never prints NaN or a negative zero", () => {
     expect(formatNumber(Number.NaN, "lb")).toBe("—");
     expect(formatNumber(-0.2, "lb")).toBe("0");
+  });
+});
+
+describe("a saved check's title", () => {
+  it("names the customer first, then the rig", () => {
+    expect(savedCheckTitle({ customerName: "Dana Whitlock", vehicleLabel: "Harrow Rookfield 2500 pickup", hitchedLabel: "Travel trailer" })).toBe(
+      "Dana Whitlock: travel trailer on Harrow Rookfield 2500 pickup",
+    );
+  });
+  it("speaks of the customer's own vehicle when it was typed in without a name", () => {
+    expect(savedCheckTitle({ customerName: "Dana Whitlock", vehicleLabel: "Typed vehicle", hitchedLabel: "Platform rack" })).toBe("Dana Whitlock: platform rack on their vehicle");
+  });
+  it("reads as the rig alone without a customer, and never shows the stored fallback label", () => {
+    const title = savedCheckTitle({ customerName: null, vehicleLabel: "Typed vehicle", hitchedLabel: "Platform rack" });
+    expect(title).toBe("Platform rack on a vehicle typed in");
+    expect(title).not.toContain("Typed vehicle");
   });
 });

@@ -15,6 +15,7 @@ import { entityId } from "@/lib/validation/checks";
 import { SharePanel } from "./share-panel";
 import { AppliedRules, localRulesOf } from "@/components/rules/applied-rules";
 import { ruleSetStanding } from "@/lib/towing/rules/places";
+import { savedCheckTitle } from "@/lib/format";
 
 export const metadata: Metadata = { title: "Saved check" };
 
@@ -41,7 +42,7 @@ export default async function SavedCheckPage({ params }: { params: Promise<{ id:
             Saved checks
           </Link>
         }
-        title={`${check.vehicleLabel ?? "Vehicle"} · ${check.hitchedLabel ?? "nothing hitched"}`}
+        title={savedCheckTitle(check)}
         description={`Saved ${when.format(check.createdAt)}${check.customerName ? ` for ${check.customerName}` : ""}. Computed by Towmargin core ${check.coreVersion}${check.result.rules ? `, read against the rules of ${check.result.rules.title} (rule set ${check.result.rules.ruleSetVersion})` : ""}; this snapshot never changes.`}
         actions={
           <>

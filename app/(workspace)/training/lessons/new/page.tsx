@@ -7,6 +7,7 @@ import { getCheck } from "@/lib/server/checks";
 import { LESSON_FAMILY_IDS, LIBRARY, type LessonFamily } from "@/lib/training/library";
 import { entityId } from "@/lib/validation/checks";
 import { createLessonAction } from "../../actions";
+import { savedCheckTitle } from "@/lib/format";
 
 export const metadata: Metadata = { title: "New worked example" };
 
@@ -22,7 +23,7 @@ export default async function NewLessonPage({ searchParams }: { searchParams: Pr
   const checkFamily = check?.result.verdict.governing?.checkId;
   const defaults = check
     ? {
-        title: `${check.vehicleLabel ?? "Vehicle"} with ${check.hitchedLabel ?? "its load"}`,
+        title: savedCheckTitle({ vehicleLabel: check.vehicleLabel, hitchedLabel: check.hitchedLabel }),
         story: "A customer asked at the counter whether this rig fits its ratings. Tell the learner who they are and what they want to tow or carry.",
         question: "Is this rig within its ratings, and which limit is closest?",
         rule: "The lowest rating of any part is the limit for the whole rig.",
