@@ -10,7 +10,7 @@ import type { RigInput } from "@/lib/towing/input";
 import type { ListChecksQuery, SaveCheckInput } from "@/lib/validation/checks";
 import type { AccessContext } from "./access";
 import { matchVehicleProfileName } from "./profiles";
-import { AccessDenied } from "./team";
+import { AccessDenied } from "./access-denied";
 import { newId } from "./tokens";
 
 const TRAILER_WORDS: Record<string, string> = {

@@ -8,7 +8,7 @@ import { can, type Permission } from "@/lib/roles";
 import type { DOCUMENT_KINDS } from "@/lib/validation/fleet";
 import type { AccessContext } from "./access";
 import { documentStore, type StoredObject } from "./storage";
-import { AccessDenied } from "./team";
+import { AccessDenied } from "./access-denied";
 import { newId } from "./tokens";
 
 function assertCan(access: AccessContext, permission: Permission) {

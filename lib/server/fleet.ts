@@ -12,7 +12,7 @@ import type { UnitSystem } from "@/lib/towing/units";
 import type { ImportOptions, MatrixQuery, ProfileInput } from "@/lib/validation/fleet";
 import type { AccessContext } from "./access";
 import { figureSourcesByVehicle } from "./installations";
-import { AccessDenied } from "./team";
+import { AccessDenied } from "./access-denied";
 import { newId } from "./tokens";
 
 function assertCan(access: AccessContext, permission: Permission) {

@@ -20,7 +20,7 @@ import { checkDocumentBytes, cleanFileName } from "./documents";
 import { absoluteUrl, composeMail, sendMail } from "./mail";
 import { createInstallationLink, listInstallationLinks, resolveInstallationToken } from "./share-links";
 import { documentStore, type StoredObject } from "./storage";
-import { AccessDenied } from "./team";
+import { AccessDenied } from "./access-denied";
 import { newId } from "./tokens";
 
 function assertCan(access: AccessContext, permission: Permission) {

@@ -5,7 +5,7 @@ import { capturedMail, invitations, memberships, users } from "@/db/schema";
 import { env } from "@/lib/env";
 import { can } from "@/lib/roles";
 import type { AccessContext } from "./access";
-import { AccessDenied } from "./team";
+import { AccessDenied } from "./access-denied";
 
 /** The captured-mail page exists only where the fake SMTP server is in use (demo, development, tests). */
 export function isMailboxEnabled(): boolean {

@@ -5,7 +5,7 @@ import { organisations } from "@/db/schema";
 import { can } from "@/lib/roles";
 import type { OrganisationSettingsInput } from "@/lib/validation/auth";
 import type { AccessContext } from "./access";
-import { AccessDenied } from "./team";
+import { AccessDenied } from "./access-denied";
 
 /** How long a new customer link works unless the person making it chooses otherwise (days). */
 export async function linkLifetimeDays(access: AccessContext): Promise<number> {

@@ -6,7 +6,7 @@ import { can } from "@/lib/roles";
 import type { RigInput } from "@/lib/towing/input";
 import type { AccessContext } from "./access";
 import { newId } from "./tokens";
-import { AccessDenied } from "./team";
+import { AccessDenied } from "./access-denied";
 
 export type VehicleProfileData = Pick<RigInput, "units" | "vehicle" | "hitch" | "load">;
 export type TrailerProfileData = Pick<RigInput, "units" | "trailer" | "ballMount" | "weightDistribution">;

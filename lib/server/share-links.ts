@@ -9,7 +9,7 @@ import type { AccessContext } from "./access";
 import { absoluteUrl, composeMail, sendMail } from "./mail";
 import { limitMemberMail } from "./mail-limits";
 import { linkLifetimeDays } from "./organisation";
-import { AccessDenied } from "./team";
+import { AccessDenied } from "./access-denied";
 import { hashToken, newId, newShareToken } from "./tokens";
 
 export function shareUrl(token: string): string {

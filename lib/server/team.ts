@@ -5,14 +5,13 @@ import { invitations, memberships, organisations, users } from "@/db/schema";
 import { can, ROLE_LABELS, type Permission, type Role } from "@/lib/roles";
 import type { InviteInput } from "@/lib/validation/auth";
 import type { AccessContext } from "./access";
+import { AccessDenied } from "./access-denied";
 import { absoluteUrl, composeMail, sendMail } from "./mail";
 import { limitMemberMail } from "./mail-limits";
 import { hashPassword } from "./passwords";
 import { hashToken, newId, newToken } from "./tokens";
 
 const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
-
-export class AccessDenied extends Error {}
 
 /** The data layer re-checks the role itself: a caller that forgot to authorize still cannot write. */
 function assertCan(access: AccessContext, permission: Permission) {

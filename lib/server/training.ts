@@ -9,7 +9,7 @@ import { lessonGap, markAttempt, prepareLesson, type MarkedStep, type PreparedLe
 import type { AttemptInput, LessonInput } from "@/lib/validation/training";
 import type { AccessContext } from "./access";
 import { absoluteUrl } from "./mail";
-import { AccessDenied } from "./team";
+import { AccessDenied } from "./access-denied";
 import { hashToken, newId, newShareToken } from "./tokens";
 
 export type Visibility = "draft" | "organisation" | "public";
