@@ -3,21 +3,9 @@
  */
 import { fW, lessOrEqual, type Ctx } from "./context";
 import { need } from "./missing";
+import { TONGUE_BANDS } from "./reference";
 import type { MissingField } from "./types";
-import type { RigInput, TrailerType } from "./input";
-
-/** Tongue-weight share bands by trailer type, as ratios. */
-export const TONGUE_BANDS: Record<TrailerType, { min: number; max: number }> = {
-  // Source: GM and Nissan owner's manuals (conventional trailers 10–15 %)
-  utility: { min: 0.1, max: 0.15 },
-  "enclosed-cargo": { min: 0.1, max: 0.15 },
-  travel: { min: 0.1, max: 0.15 },
-  "car-hauler": { min: 0.1, max: 0.15 },
-  "horse-livestock": { min: 0.1, max: 0.15 },
-  other: { min: 0.1, max: 0.15 },
-  // Source: BoatUS (an engineering instructor's guidance), boat trailers 7–12 %
-  boat: { min: 0.07, max: 0.12 },
-};
+import type { RigInput } from "./input";
 
 export interface Derived {
   rig: RigInput;

@@ -27,7 +27,7 @@ export { convertRig } from "./convert-rig";
 export { parseEvaluateRequest, parsePlace, type EvaluateRequest, type EvaluateDetail } from "./request";
 export { tongueWeightByScale, tongueWeightByBeam, tongueWeightByPublicScale, DIRECT_SCALE_LIMIT_LB, type MeasureResult, type AxlePair } from "./measure";
 export { GENERAL_CAUTIONS } from "./checks/verdict";
-export { TONGUE_BANDS } from "./derive";
+export { TONGUE_BANDS, CLASS_MAX_GTW, COMMON_DROPS_IN } from "./reference";
 export { KG_PER_LB, MM_PER_IN, type UnitSystem, type UnitString } from "./units";
 export * from "./types";
 export {

@@ -6,10 +6,9 @@
 import { fL, iL, lessOrEqual, marginL, NO_STEPS, NO_TEXT, qL, rL, statusOf, type Ctx } from "../context";
 import type { Derived } from "../derive";
 import { need } from "../missing";
+import { COMMON_DROPS_IN } from "../reference";
 import type { BallMountResult, MissingField, Step } from "../types";
 
-/** Ball mounts come in whole-inch rises and drops up to about 12 in. Common practice, no published source. */
-export const COMMON_DROPS_IN = [0, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12];
 /** How far off level is still fine: about 1 in at the coupler. Common practice, no published source. */
 export const LEVEL_TOLERANCE_IN = 1;
 

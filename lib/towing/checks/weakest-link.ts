@@ -21,6 +21,7 @@ import {
 import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
 import { HITCHING_CAUTIONS, overLinkAdvice } from "../advice";
 import { need } from "../missing";
+import { CLASS_MAX_GTW } from "../reference";
 import type { CheckStatus, Governing, Link, MissingField, Step, WeakestLinkResult } from "../types";
 
 export interface RatingEntry {
@@ -38,9 +39,6 @@ export interface RatingSet {
   /** Optional links that could not be checked (no figure entered). */
   unchecked: string[];
 }
-
-/** Maximum gross trailer weight by hitch class. Source: New York 15 NYCRR 57.3(c) (adopts SAE J684). */
-export const CLASS_MAX_GTW: Record<number, number> = { 1: 2000, 2: 3500, 3: 5000, 4: 10000 };
 
 /** Every rating that limits this rig's trailer, in canonical pounds, with what is missing (computed once per rig). */
 export function ratingSet(d: Derived): RatingSet {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { convertRig, evaluateRig, KG_PER_LB, type WeakestLinkResult } from "@/lib/towing";
-import { CLASS_MAX_GTW } from "@/lib/towing/checks/weakest-link";
+import { CLASS_MAX_GTW } from "@/lib/towing/reference";
 import { check, pickupRig } from "./helpers";
 
 const wl = (r: ReturnType<typeof pickupRig>) => check<WeakestLinkResult>(evaluateRig(r), "weakest-link");

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { rigInputSchema } from "@/lib/towing/input";
 import { CHECK_IDS } from "@/lib/towing/types";
-import { CLASS_MAX_GTW } from "@/lib/towing/checks/weakest-link";
+import { CLASS_MAX_GTW } from "@/lib/towing/reference";
 import { LESSON_FAMILIES, LIBRARY, libraryExample } from "@/lib/training/library";
 import { markAttempt, prepareLesson } from "@/lib/training/prepare";
 

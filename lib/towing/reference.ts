@@ -1,0 +1,30 @@
+/**
+ * The trade's tables the core reads: each row with its source beside it. Single figures that belong to one
+ * check (a tolerance, a default target) stay beside that check; docs/sources.md says what each source is.
+ */
+import type { TrailerType } from "./input";
+
+/** Tongue-weight share bands by trailer type, as ratios. */
+export const TONGUE_BANDS: Record<TrailerType, { min: number; max: number }> = {
+  // Source: GM and Nissan owner's manuals (conventional trailers 10–15 %)
+  utility: { min: 0.1, max: 0.15 },
+  "enclosed-cargo": { min: 0.1, max: 0.15 },
+  travel: { min: 0.1, max: 0.15 },
+  "car-hauler": { min: 0.1, max: 0.15 },
+  "horse-livestock": { min: 0.1, max: 0.15 },
+  other: { min: 0.1, max: 0.15 },
+  // Source: BoatUS (an engineering instructor's guidance), boat trailers 7–12 %
+  boat: { min: 0.07, max: 0.12 },
+};
+
+/** Maximum gross trailer weight (lb) by hitch class. */
+export const CLASS_MAX_GTW: Record<number, number> = {
+  // Source: New York 15 NYCRR 57.3(c) (adopts SAE J684), every row
+  1: 2000,
+  2: 3500,
+  3: 5000,
+  4: 10000,
+};
+
+/** Ball mounts come in whole-inch rises and drops up to about 12 in. Common practice, no published source. */
+export const COMMON_DROPS_IN = [0, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12];
