@@ -1,21 +1,19 @@
 "use client";
 
 /**
- * The check screen ("the workbench"): the rig's inputs on the left in three cards, the verdict on the right,
- * recomputed in the browser on every keystroke that leaves the inputs valid. The core runs synchronously on
- * the parsed values; the last good verdict stays up, marked as waiting, while a field is invalid.
+ * The check screen ("the workbench"): the units, place and example pickers on top, the rig's inputs on the left
+ * in three cards (rig-cards.tsx), the live verdict on the right (live-verdict.tsx), and the save areas
+ * (save-check.tsx, save-vehicle-profile.tsx). Holds the form, the units, the place and what is hitched.
  */
-import { useCallback, useDeferredValue, useMemo, useLayoutEffect, useRef, useState, type FormEvent } from "react";
+import { useCallback, useLayoutEffect, useMemo, useRef, useState } from "react";
 import Link from "next/link";
-import { FormProvider, useForm, useWatch, type Control, type Resolver } from "react-hook-form";
+import { FormProvider, useForm, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { ChevronDown, CircleAlert, Save, UserRound } from "lucide-react";
-import { Button, Card, CardBody, CardHeader, Dialog, Field, FormMessage, Select, TextInput, Textarea, VerdictBadge, cn, levelWords } from "@/components/ui";
-import { evaluateRig, type RigInput, type RigResult, type UnitSystem, type AccessoryFitResult } from "@/lib/towing";
+import { Field, Select, cn } from "@/components/ui";
+import type { RigInput, UnitSystem } from "@/lib/towing";
 import { rigInputSchema } from "@/lib/validation/rig";
 import { RigCard, UnitsProvider, WordsProvider } from "./field-parts";
 import { PlacePicker, type PlaceChoice } from "./place-picker";
-import { AppliedRules, localRulesOf } from "@/components/rules/applied-rules";
 import { ruleSetFor } from "@/lib/towing/rules/places";
 import type { Place } from "@/lib/towing/rules/types";
 import {
@@ -45,10 +43,10 @@ import { GlossaryDisclosure } from "@/components/glossary/glossary-disclosure";
 import { GlossaryList } from "@/components/glossary/glossary-list";
 import { SYMBOLS, TERMS } from "@/lib/glossary";
 import { SAMPLE_RIGS } from "./sample-rigs";
-import { SideView } from "./side-view";
-import { VerdictPanel } from "./verdict-panel";
-
-type ActionResult = { ok: boolean; message?: string; fieldErrors?: Record<string, string[]> };
+import { LiveVerdict } from "./live-verdict";
+import { parseCandidate } from "./parse-candidate";
+import { SaveCheck, type SaveCheckHandler, type SaveCheckInput } from "./save-check";
+import { SaveVehicleProfile, type SaveVehicleProfileHandler } from "./save-vehicle-profile";
 
 export interface CheckWorkbenchProps {
   /** Starting rig (already valid per rigInputSchema); default: an empty rig in `units` with a trailer of type "travel". */
@@ -64,280 +62,14 @@ export interface CheckWorkbenchProps {
     accessories: Array<{ id: string; name: string; rig: Pick<RigInput, "units" | "accessory" | "extender"> }>;
   };
   /** When given, a "Save check" area appears (customer name optional, note optional). Called with the parsed rig. */
-  onSave?: (input: { rig: RigInput; customerName?: string; note?: string; place?: Place | null }) => Promise<ActionResult & { checkId?: string }>;
+  onSave?: SaveCheckHandler;
   /** Where the organisation works: the check is read against its rules unless staff choose another place. */
   place?: Place;
   /** When given, a "Save vehicle as profile" button appears on the vehicle card (asks for a name in a Dialog). */
-  onSaveVehicleProfile?: (input: { name: string; rig: Pick<RigInput, "units" | "vehicle" | "hitch" | "load"> }) => Promise<ActionResult>;
+  onSaveVehicleProfile?: SaveVehicleProfileHandler;
   /** Shown when signed out: a line saying nothing is saved and a link to sign in. */
   signedOut?: boolean;
 }
-
-type Parsed = { ok: true; rig: RigInput } | { ok: false; issues: Array<{ path: string; message: string }> };
-
-function parseCandidate(values: RigFormValues, kind: HitchedKind): Parsed {
-  const parsed = rigInputSchema.safeParse(toRigCandidate(values, kind));
-  if (parsed.success) return { ok: true, rig: parsed.data };
-  const seen = new Set<string>();
-  const issues: Array<{ path: string; message: string }> = [];
-  for (const issue of parsed.error.issues) {
-    const path = issue.path.map(String).join(".");
-    if (seen.has(path)) continue;
-    seen.add(path);
-    issues.push({ path, message: issue.message });
-  }
-  return { ok: false, issues };
-}
-
-// ---------------------------------------------------------------- the live verdict
-
-interface LiveProps {
-  control: Control<RigFormValues, unknown, RigInput>;
-  kind: HitchedKind;
-  tightMarginRatio?: number;
-  place: PlaceChoice;
-  onJump: (path: string) => void;
-}
-
-/**
- * Subscribes to every value, parses and evaluates; the only part of the screen that re-renders on each
- * keystroke besides the field itself. Renders straight into the page grid: the phone's bar, the verdict
- * column and the side view are siblings there.
- */
-/** The verdict sentence without its leading level word ("Over: …"), where a badge beside it already says it. */
-function withoutLevelWord(message: string): string {
-  const cut = message.match(/^(?:Adjust the set-up before towing|[A-Z][a-z]+(?: [a-z]+)?): (.*)$/s);
-  if (!cut) return message;
-  const rest = cut[1]!;
-  return rest.charAt(0).toUpperCase() + rest.slice(1);
-}
-
-function LiveVerdict({ control, kind, tightMarginRatio, place, onJump }: LiveProps) {
-  const values = useWatch({ control }) as RigFormValues;
-  const parsed = useMemo(() => parseCandidate(values, kind), [values, kind]);
-  const evaluated = useMemo(
-    () => (parsed.ok ? { rig: parsed.rig, result: evaluateRig(parsed.rig, { tightMarginRatio, place: place ?? undefined }) } : null),
-    [parsed, tightMarginRatio, place],
-  );
-  // While a figure is half-typed, the last rig that parsed stays on screen (kept as state, set while rendering).
-  const [lastGood, setLastGood] = useState<{ rig: RigInput; result: RigResult } | null>(null);
-  if (evaluated && evaluated !== lastGood) setLastGood(evaluated);
-  const shown = evaluated ?? lastGood;
-  const [open, setOpen] = useState(false);
-  // The drawing follows a moment after the verdict (a deferred render), so typing never waits for it.
-  const deferredValues = useDeferredValue(values);
-  const sideRig = useMemo(() => toRigCandidate(deferredValues, kind) as RigInput, [deferredValues, kind]);
-  if (!shown) return null;
-  const { result, rig } = shown;
-  const level = result.verdict.level;
-  const waiting = !parsed.ok ? parsed.issues : null;
-  const accessoryAngle = (result.checks.find((c) => c.id === "accessory-fit") as AccessoryFitResult | undefined)?.accessoryAngle?.value;
-
-  const waitingNote = waiting ? (
-    <div role="alert" className="rounded-md border border-over/45 bg-over-soft px-3 py-2.5 text-sm text-ink">
-      <p className="flex items-start gap-2 font-semibold">
-        <CircleAlert aria-hidden="true" className="mt-px size-4 shrink-0 text-over" />
-        Waiting for valid input: the verdict below is the last one that had valid figures.
-      </p>
-      <ul className="mt-1.5 space-y-1 pl-6">
-        {waiting.map((issue) => (
-          <li key={issue.path}>
-            <button type="button" onClick={() => onJump(issue.path)} className="text-left text-accent-strong underline underline-offset-2 hover:text-ink">
-              {issue.message}
-            </button>
-          </li>
-        ))}
-      </ul>
-    </div>
-  ) : null;
-
-  return (
-    <>
-      {/* Phone: a compact bar on top that opens to the full list. */}
-      <div className="sticky top-0 z-20 order-first rounded-card border border-rule bg-panel/95 px-3 py-2 shadow-card backdrop-blur lg:hidden">
-        <button
-          type="button"
-          onClick={() => setOpen((o) => !o)}
-          aria-expanded={open}
-          aria-controls="workbench-verdict"
-          className="flex w-full items-center gap-3 text-left"
-        >
-          <VerdictBadge status={level} label={waiting ? `${levelWords[level]} (waiting)` : levelWords[level]} />
-          <span className="min-w-0 flex-1 truncate text-sm text-ink">{withoutLevelWord(result.verdict.message)}</span>
-          <span className="inline-flex shrink-0 items-center gap-1 text-sm font-medium text-accent-strong">
-            {open ? "Hide" : "Checks"}
-            <ChevronDown aria-hidden="true" className={cn("size-4 transition-transform motion-reduce:transition-none", open && "rotate-180")} />
-          </span>
-        </button>
-      </div>
-
-      {/* Phone: the full list opens as a sheet under the bar, wherever the form is scrolled to. Desktop: the
-          column stretches over every row so its panel stays in view (sticky) while the form scrolls. */}
-      <aside
-        id="workbench-verdict"
-        aria-label="Verdict"
-        className={cn(
-          "order-first min-w-0 lg:static lg:order-none lg:col-start-2 lg:row-span-4 lg:row-start-1 lg:block lg:max-h-none lg:self-stretch lg:overflow-visible lg:p-0",
-          open ? "fixed inset-x-2 top-16 bottom-2 z-30 block overflow-y-auto overscroll-contain rounded-card" : "hidden",
-        )}
-      >
-        <div className="space-y-3 lg:sticky lg:top-4 lg:max-h-[calc(100dvh-2rem)] lg:overflow-y-auto lg:pr-1">
-          <Card className={cn("px-4 py-4 sm:px-5", waiting && "opacity-95")}>
-            {waitingNote ? <div className="mb-4">{waitingNote}</div> : null}
-            <div className={cn(waiting && "opacity-60 transition-opacity")}>
-              <VerdictPanel result={result} rig={rig} />
-            </div>
-          </Card>
-          {localRulesOf(result) ? (
-            <Card className="px-4 py-4 sm:px-5">
-              <AppliedRules rules={localRulesOf(result)!} />
-            </Card>
-          ) : null}
-        </div>
-      </aside>
-
-      <Card as="section" aria-labelledby="workbench-side-title" className="min-w-0 lg:col-start-1">
-        <CardHeader titleId="workbench-side-title" title="Side view" description="Heights and distances from the figures entered, to scale." />
-        <CardBody>
-          <SideView rig={sideRig} kind={kind} accessoryAngle={accessoryAngle} />
-        </CardBody>
-      </Card>
-    </>
-  );
-}
-
-// ---------------------------------------------------------------- save areas
-
-function SaveCheck({ onSave, getRig }: { onSave: NonNullable<CheckWorkbenchProps["onSave"]>; getRig: () => RigInput | null; }) {
-  const [customerName, setCustomerName] = useState("");
-  const [note, setNote] = useState("");
-  const [pending, setPending] = useState(false);
-  const [state, setState] = useState<(ActionResult & { checkId?: string }) | null>(null);
-
-  const submit = async (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    const rig = getRig();
-    if (!rig) {
-      setState({ ok: false, message: "Some figures are not valid yet: fix the fields marked in red, then save." });
-      return;
-    }
-    setPending(true);
-    try {
-      const answer = await onSave({ rig, customerName: customerName.trim() || undefined, note: note.trim() || undefined });
-      setState(answer);
-    } catch {
-      setState({ ok: false, message: "The check could not be saved. Try again in a moment." });
-    } finally {
-      setPending(false);
-    }
-  };
-  const errorOf = (key: string) => state?.fieldErrors?.[key]?.[0];
-
-  return (
-    <Card as="section" aria-labelledby="workbench-save-title" className="min-w-0 lg:col-start-1">
-      <CardHeader titleId="workbench-save-title" title="Save check" description="Keeps the figures and the verdict, for the customer's page and for later." />
-      <CardBody>
-        <form onSubmit={submit} noValidate className="space-y-4">
-          <div className="grid gap-4 sm:grid-cols-2">
-            <Field label="Customer name (optional)" error={errorOf("customerName")}>
-              <TextInput value={customerName} onChange={(e) => setCustomerName(e.target.value)} autoComplete="off" maxLength={200} />
-            </Field>
-            <Field label="Note (optional)" error={errorOf("note")} className="sm:col-span-2">
-              <Textarea value={note} onChange={(e) => setNote(e.target.value)} rows={2} maxLength={2000} />
-            </Field>
-          </div>
-          <FormMessage tone={state?.ok ? "success" : "error"}>
-            {state?.ok ? (
-              <>
-                Check saved.{" "}
-                {state.checkId ? (
-                  <Link href={`/checks/${state.checkId}`} className="font-semibold text-accent-strong underline">
-                    Open the saved check
-                  </Link>
-                ) : null}
-              </>
-            ) : state?.message ? (
-              state.message
-            ) : state && state.fieldErrors ? (
-              "Some figures need a look before this can be saved."
-            ) : null}
-          </FormMessage>
-          <Button type="submit" loading={pending} icon={<Save />}>
-            Save check
-          </Button>
-        </form>
-      </CardBody>
-    </Card>
-  );
-}
-
-function SaveVehicleProfile({ onSave, getPart }: { onSave: NonNullable<CheckWorkbenchProps["onSaveVehicleProfile"]>; getPart: () => Pick<RigInput, "units" | "vehicle" | "hitch" | "load"> | null; }) {
-  const [open, setOpen] = useState(false);
-  const [name, setName] = useState("");
-  const [pending, setPending] = useState(false);
-  const [state, setState] = useState<ActionResult | null>(null);
-  const [saved, setSaved] = useState<string | null>(null);
-
-  const submit = async (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    if (!name.trim()) {
-      setState({ ok: false, fieldErrors: { name: ["Give the profile a name."] } });
-      return;
-    }
-    const part = getPart();
-    if (!part) {
-      setState({ ok: false, message: "Some vehicle or hitch figures are not valid yet." });
-      return;
-    }
-    setPending(true);
-    try {
-      const answer = await onSave({ name: name.trim(), rig: part });
-      setState(answer);
-      if (answer.ok) {
-        setSaved(name.trim());
-        setOpen(false);
-        setName("");
-      }
-    } catch {
-      setState({ ok: false, message: "The profile could not be saved. Try again in a moment." });
-    } finally {
-      setPending(false);
-    }
-  };
-
-  return (
-    <div className="flex flex-wrap items-center gap-3">
-      <Button variant="secondary" size="sm" icon={<UserRound />} onClick={() => { setState(null); setOpen(true); }}>
-        Save vehicle as profile
-      </Button>
-      {saved ? <p role="status" className="text-sm text-within">Saved as “{saved}”.</p> : null}
-      <Dialog
-        open={open}
-        onClose={() => setOpen(false)}
-        title="Save vehicle as profile"
-        description="The vehicle's ratings, lengths and load, with the hitch, to pick again next time."
-        closeOnBackdrop={false}
-      >
-        <form onSubmit={submit} noValidate className="space-y-4">
-          <Field label="Profile name" error={state?.fieldErrors?.name?.[0]} required>
-            <TextInput value={name} onChange={(e) => setName(e.target.value)} autoFocus maxLength={120} />
-          </Field>
-          <FormMessage>{state && !state.ok ? state.message : null}</FormMessage>
-          <div className="flex flex-wrap justify-end gap-2">
-            <Button variant="secondary" onClick={() => setOpen(false)}>
-              Cancel
-            </Button>
-            <Button type="submit" loading={pending}>
-              Save profile
-            </Button>
-          </div>
-        </form>
-      </Dialog>
-    </div>
-  );
-}
-
-// ---------------------------------------------------------------- the workbench
 
 export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio, profiles, onSave, onSaveVehicleProfile, signedOut, place: home }: CheckWorkbenchProps) {
   const [units, setUnits] = useState<UnitSystem>(startUnits);
@@ -437,7 +169,7 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
   };
 
   const saveWithErrors = useCallback(
-    async (input: Parameters<NonNullable<CheckWorkbenchProps["onSave"]>>[0]) => {
+    async (input: SaveCheckInput) => {
       const answer = await onSave!({ ...input, place });
       for (const [path, messages] of Object.entries(answer.fieldErrors ?? {})) {
         if (messages[0] && path !== "customerName" && path !== "note") setError(path as never, { type: "server", message: messages[0] });
