@@ -2,7 +2,7 @@
  * Benchmark of the calculation core: `npm run bench`.
  * 1. One full evaluation with steps (median of batches, microseconds per evaluation).
  * 2. A 500-vehicle × 200-trailer matrix as the server works it out (lib/fleet/matrix.ts: the profiles' parts
- *    composed per pair, the core's fast path, the governing margin picked), milliseconds for all 100,000 pairs.
+ *    composed per pair, the core's evaluateRigFast, the governing margin picked), milliseconds for all 100,000 pairs.
  * 3. matrixPerPairVsEvaluate: the matrix's time per pair over one fast evaluation of the same rigs, already
  *    composed, measured in turn in the same run (target ≤ 1.2: the matrix adds no more than a fifth).
  * The last line printed is JSON: {"evaluateMedianUs": …, "matrix500x200Ms": …, "matrixPerPairVsEvaluate": …}.

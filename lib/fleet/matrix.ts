@@ -1,6 +1,6 @@
 /**
  * One pair of the pairing matrix, pure: a vehicle's parts and a trailer's or accessory's parts composed
- * into one rig and run through the core's fast path. The data layer (lib/server/fleet.ts) and `npm run bench`
+ * into one rig and run through the core's `evaluateRigFast`. The data layer (lib/server/fleet.ts) and `npm run bench`
  * share it, so the bench measures what the server does per pair.
  */
 import { convertRig, evaluateRigFast } from "../towing/index";

@@ -296,7 +296,7 @@ function evaluateAll(entry: MatrixCacheEntry, units: UnitSystem, ratio: number):
 const FULL_EVALUATION_LIMIT = 20_000;
 
 /**
- * Every vehicle against every trailer and accessory, with the core's fast path. Filters by name and by
+ * Every vehicle against every trailer and accessory, with the core's `evaluateRigFast`. Filters by name and by
  * verdict; pages over vehicles (rows) and over trailers and accessories (columns). A verdict filter needs
  * every pair: the full result is kept per organisation until a profile changes.
  */

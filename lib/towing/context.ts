@@ -10,7 +10,7 @@ export const EPS = 1e-9;
 
 export interface Ctx {
   u: UnitSet;
-  /** Build steps, messages, advice and cautions (false on the fast path). */
+  /** Build steps, messages, advice and cautions (false for evaluateRigFast and the compact answer). */
   detail: boolean;
   tight: number;
   /** Accessory reference lever arm, canonical inches. */

@@ -1,6 +1,6 @@
 /**
  * Entry points: evaluateRig (full, with steps and texts) and evaluateRigFast (statuses, governing items and
- * margins, no steps, for the fleet matrix). Both run the same check functions; the fast path switches off
+ * margins, no steps, for the fleet matrix). Both run the same check functions; evaluateRigFast switches off
  * steps and texts through the context.
  */
 import { toCanonical } from "./convert-rig";

@@ -60,7 +60,7 @@ describe("verdict", () => {
     expect(v.message).toMatch(/^Not confirmed: .*2 checks still lack data/);
   });
 
-  it("the fast path agrees with the full evaluation", () => {
+  it("evaluateRigFast agrees with the full evaluation", () => {
     const r = pickupRig({ trailer: { grossTrailerWeight: 4300, tongueWeight: 520 } });
     const full = evaluateRig(r);
     const fast = evaluateRigFast(r);
