@@ -16,6 +16,7 @@ import type { PlaceChoice } from "./place-picker";
 import { toRigCandidate, type HitchedKind, type RigFormValues } from "./rig-form";
 import { SideView } from "./side-view";
 import { VerdictPanel } from "./verdict-panel";
+import { WdComparison } from "./wd-comparison";
 
 export interface LiveVerdictProps {
   control: Control<RigFormValues, unknown, RigInput>;
@@ -111,7 +112,7 @@ export function LiveVerdict({ control, kind, tightMarginRatio, place, onJump }: 
           <Card className={cn("px-4 py-4 sm:px-5", waiting && "opacity-95")}>
             {waitingNote ? <div className="mb-4">{waitingNote}</div> : null}
             <div className={cn(waiting && "opacity-60 transition-opacity")}>
-              <VerdictPanel result={result} rig={rig} />
+              <VerdictPanel result={result} rig={rig} underHeadline={rig.trailer ? <WdComparison rig={rig} tightMarginRatio={tightMarginRatio} place={place ?? undefined} /> : null} />
             </div>
           </Card>
           {localRulesOf(result) ? (

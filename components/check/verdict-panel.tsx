@@ -43,6 +43,8 @@ export interface VerdictPanelProps {
   className?: string;
   /** Heading level of the panel's title. */
   headingLevel?: "h2" | "h3";
+  /** Shown right under the headline, before the figures still to measure and the checks (the check screen's comparison). */
+  underHeadline?: ReactNode;
 }
 
 function isWeakestLink(c: AnyCheckResult): c is WeakestLinkResult {
@@ -243,7 +245,7 @@ function Charts(props: { result: RigResult; rig?: RigInput }) {
   );
 }
 
-function VerdictPanelImpl({ result, rig, charts = true, className, headingLevel = "h2" }: VerdictPanelProps) {
+function VerdictPanelImpl({ result, rig, charts = true, className, headingLevel = "h2", underHeadline }: VerdictPanelProps) {
   const rootRef = useRef<HTMLElement>(null);
   const { verdict } = result;
   const Heading = headingLevel;
@@ -294,6 +296,8 @@ function VerdictPanelImpl({ result, rig, charts = true, className, headingLevel 
         ) : null}
         <p className="text-xs text-ink-faint">Tight means less than {formatRatio(verdict.tightMarginRatio, 0)} of a limit left.</p>
       </header>
+
+      {underHeadline}
 
       {toMeasure.length ? (
         <section aria-labelledby="verdict-to-measure-title" id="verdict-to-measure" data-testid="still-to-measure" className="scroll-mt-24 rounded-md border border-dashed border-unknown/50 bg-unknown-soft px-3 py-2.5">

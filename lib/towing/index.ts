@@ -24,6 +24,7 @@ export {
   type AccessoryType,
 } from "./input";
 export { convertRig } from "./convert-rig";
+export { compareWeightDistribution, type WdComparison, type WdSide } from "./compare-wd";
 export { parseEvaluateRequest, parsePlace, type EvaluateRequest, type EvaluateDetail } from "./request";
 export { tongueWeightByScale, tongueWeightByBeam, tongueWeightByPublicScale, DIRECT_SCALE_LIMIT_LB, type MeasureResult, type AxlePair } from "./measure";
 export { GENERAL_CAUTIONS } from "./checks/verdict";

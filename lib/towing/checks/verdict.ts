@@ -89,10 +89,16 @@ export function buildVerdict(summary: FastCheck[], checks: AnyCheckResult[], c: 
   actions.sort((a, b) => order[a.status] - order[b.status]);
   verdict.actions = actions;
   verdict.cautions = GENERAL_CAUTIONS;
-  const overs = checks.filter((ch) => ch.status === "over");
-  const adjusts = checks.filter((ch) => ch.status === "adjust");
-  const tights = checks.filter((ch) => ch.status === "tight");
-  const alsoAdjust = adjusts.length ? ` The set-up also needs adjusting: ${adjusts.map((ch) => ch.title.toLowerCase()).join(", ")}.` : "";
+  // The headline speaks of the check that governs when it is of the level's kind, so the sentence on top and
+  // the governing line under it name the same limit; otherwise of the first such check in the stable order.
+  const governsFirst = (list: AnyCheckResult[]) => {
+    const at = list.findIndex((ch) => ch.id === governing?.checkId);
+    return at > 0 ? [list[at]!, ...list.slice(0, at), ...list.slice(at + 1)] : list;
+  };
+  const overs = governsFirst(checks.filter((ch) => ch.status === "over"));
+  const adjusts = governsFirst(checks.filter((ch) => ch.status === "adjust"));
+  const tights = governsFirst(checks.filter((ch) => ch.status === "tight"));
+  const alsoAdjust = adjusts.length ? ` The set-up also needs adjusting: ${checks.filter((ch) => ch.status === "adjust").map((ch) => ch.title.toLowerCase()).join(", ")}.` : "";
   const stillLacking = incomplete.length ? ` ${lacking(incomplete.length)}.` : "";
   verdict.message =
     level === "over"

@@ -69,3 +69,21 @@ describe("verdict", () => {
     expect(fast.governing).toEqual(full.verdict.governing);
   });
 });
+
+describe("the headline and the governing line agree", () => {
+  it("speaks of the check that governs when several are tight", () => {
+    // Common practice, no published source: the 10 % tight threshold. Invented figures. The hitch's rating
+    // leaves 300 of 4,500 lb (6.7 %). Statics: the rear axle carries 2,500 + 500 × (145 + 50) / 145 = 3,172.4 lb
+    // of its 3,350 lb GAWR, 5.3 % left: the rear axle governs, and the headline speaks of it, not of the hitch.
+    const result = evaluateRig(pickupRig({ trailer: { grossTrailerWeight: 4200 }, vehicle: { gawrRear: 3350 } }));
+    expect(result.verdict.level).toBe("tight");
+    expect(result.checks.find((c) => c.id === "weakest-link")!.status).toBe("tight");
+    const governing = result.verdict.governing!;
+    expect(governing.checkId).toBe("axle-loads");
+    expect(governing.id).toBe("vehicle.gawrRear");
+    const governs = result.checks.find((c) => c.id === "axle-loads")!;
+    expect(governs.margin!.value).toBeCloseTo(177.6, 1);
+    const first = governs.message.charAt(0).toLowerCase() + governs.message.slice(1);
+    expect(result.verdict.message).toBe(`Tight: ${first}`);
+  });
+});
