@@ -275,6 +275,26 @@ export const TERMS = [
     definition: "A bike rack or cargo carrier in the receiver; its weight and load, levered out behind the pin, count against the hitch's tongue rating.",
   },
   {
+    id: "bed-hitch",
+    term: "Fifth wheel and gooseneck (bed hitch)",
+    names: ["fifth wheel", "fifth-wheel", "gooseneck", "bed hitch", "kingpin", "pin box"],
+    definition:
+      "A hitch in the pickup's bed, over or just ahead of the rear axle: a fifth wheel's jaws take the trailer's kingpin, a gooseneck's ball takes its coupler. No ball mount, receiver or weight distribution is used.",
+  },
+  {
+    id: "pin-weight",
+    term: "Pin weight",
+    names: ["pin weight", "kingpin weight", "pin-weight share"],
+    definition: "The share of a fifth-wheel or gooseneck trailer's weight that presses down on the bed hitch, usually 15 to 25 % of the trailer; it counts against the payload like a tongue weight.",
+  },
+  {
+    id: "front-axle-loss",
+    term: "Front-axle load loss",
+    names: ["front-axle load loss", "front-axle loss", "load the front axle loses"],
+    definition:
+      "The load a hitch load behind the rear axle lifts off the steering axle (hitch load × overhang ÷ wheelbase); weight distribution gives part of it back. The limit on it is common practice, with no published source.",
+  },
+  {
     id: "sae-j2807",
     term: "SAE J2807",
     names: ["SAE", "J2807"],
@@ -332,6 +352,8 @@ export const SYMBOLS: Record<string, SymbolEntry> = {
   T_mount: { meaning: "ball mount tongue rating", term: "ball-mount" },
   T_wd: { meaning: "weight-distribution tongue rating", term: "weight-distribution" },
   T_ext: { meaning: "extender tongue rating", term: "extender" },
+  R_bed: { meaning: "bed hitch (fifth wheel or gooseneck) gross trailer weight rating", term: "bed-hitch" },
+  T_bed: { meaning: "bed hitch pin weight rating", term: "pin-weight" },
   T_n: { meaning: "one of the tongue ratings the rack is checked against (T_1, T_2, …)", term: "tongue-weight-limit" },
   GTW_max: { meaning: "the lowest gross trailer weight rating", term: "weakest-link" },
   TW_max: { meaning: "the lowest tongue-weight rating", term: "weakest-link" },
@@ -372,6 +394,14 @@ export const SYMBOLS: Record<string, SymbolEntry> = {
   R_wd: { meaning: "rear axle load with weight distribution set", term: "weight-distribution" },
   dF: { meaning: "change on the front axle (negative: load taken off)", term: "axle-load" },
   dR: { meaning: "change on the rear axle", term: "axle-load" },
+  // Front-axle load loss
+  L_F: { meaning: "load the front axle loses to the hitch load, with nothing given back (negative: it gains)", term: "front-axle-loss" },
+  L_wd: { meaning: "load the front axle still loses with weight distribution set", term: "front-axle-loss" },
+  L: { meaning: "load the front axle loses as driven", term: "front-axle-loss" },
+  L_max: { meaning: "the most the front axle may lose: the organisation's limit times its unhitched load", term: "front-axle-loss" },
+  L_t: { meaning: "load the front axle would still lose with weight distribution set to the target", term: "front-axle-loss" },
+  k_F: { meaning: "the organisation's front-axle loss limit, as a share of the unhitched front axle (common practice, no published source)", term: "front-axle-loss" },
+  s_F: { meaning: "share of the front axle's unhitched load that it loses", term: "front-axle-loss" },
   // Weight distribution
   H1: { meaning: "front fender height, unhitched", term: "fender-height" },
   H2: { meaning: "front fender height, hitched, bars released", term: "fender-height" },
@@ -488,6 +518,10 @@ export const CHECK_WORDS: Record<CheckId, CheckWords> = {
   envelope: {
     title: "How heavy a trailer fits",
     line: "The heaviest trailer, and the most weight on its tongue, this vehicle could take as it is loaded today.",
+  },
+  "front-axle-loss": {
+    title: "Grip on the steering wheels",
+    line: "How much weight the hitch load lifts off the front wheels, which steer and brake, against the limit your organisation set.",
   },
   "local-rules": {
     title: "The rules where you drive",

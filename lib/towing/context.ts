@@ -15,6 +15,8 @@ export interface Ctx {
   tight: number;
   /** Accessory reference lever arm, canonical inches. */
   referenceArm: number;
+  /** Share of the front axle's unhitched load it may lose before the front-axle check reads tight (0.1 = 10 %). */
+  frontLossLimit: number;
 }
 
 export const NO_TEXT: string[] = [];

@@ -3,14 +3,19 @@
  */
 import { fW, lessOrEqual, type Ctx } from "./context";
 import { need } from "./missing";
-import { TONGUE_BANDS } from "./reference";
+import { BED_HITCH_BAND, TONGUE_BANDS } from "./reference";
 import type { MissingField } from "./types";
-import type { RigInput } from "./input";
+import type { HitchType, RigInput } from "./input";
 
 export interface Derived {
   rig: RigInput;
   hasTrailer: boolean;
   hasAccessory: boolean;
+  /** How the trailer hitches (receiver when not given). */
+  hitchType: HitchType;
+  /** A fifth wheel or gooseneck in the bed: no ball mount, receiver, extender or weight distribution applies. */
+  bedHitch: boolean;
+  /** Weight distribution engaged: only on a receiver rig (it does not apply to a bed hitch). */
   wdUsed: boolean;
   gtw?: number;
   /**
@@ -29,7 +34,7 @@ export interface Derived {
   twMeasureMissing: string[];
   /** Fields that would give a tongue weight: the measurement's missing distance, else the tongue weight. */
   twNeed: string[];
-  band: { min: number; max: number; source: "vehicle" | "trailer-type" | "place" };
+  band: { min: number; max: number; source: "vehicle" | "trailer-type" | "place" | "hitch-type" };
   /** Vertical load on the hitch: the tongue weight, or accessory + its load. */
   hitchLoad?: number;
   hitchLoadEstimated: boolean;
@@ -44,10 +49,13 @@ export interface Derived {
   loadedVehicle?: number;
   /** Rear axle to the receiver pin hole (the installer's measured figure), when known. */
   pin?: number;
-  /** Rear axle to the point where the hitch load acts: the ball (pin + extender + ball mount) or the accessory's load. */
+  /**
+   * Rear axle to the point where the hitch load acts: the ball (pin + extender + ball mount), the accessory's
+   * load, or the bed hitch (signed: negative ahead of the rear axle).
+   */
   overhang?: number;
-  /** How the overhang was reached: from the pin, or the ball's own figure from an older input. */
-  overhangFrom?: "pin" | "ball-as-measured";
+  /** How the overhang was reached: from the pin, the ball's own figure from an older input, or the bed hitch's figure. */
+  overhangFrom?: "pin" | "ball-as-measured" | "bed-hitch";
   /** Fields the overhang still needs. */
   overhangNeed: string[];
   /** Per-evaluation memo for figures several checks share (rating set, restoration). */
@@ -60,7 +68,9 @@ export function derive(rig: RigInput): Derived {
   const a = rig.accessory;
   const hasTrailer = !!t;
   const hasAccessory = !!a && !t;
-  const wdUsed = hasTrailer && !!rig.weightDistribution?.used;
+  const hitchType: HitchType = t?.hitchType ?? "receiver";
+  const bedHitch = hasTrailer && hitchType !== "receiver";
+  const wdUsed = hasTrailer && !bedHitch && !!rig.weightDistribution?.used;
 
   let twMeasured: number | undefined;
   let twMethod: Derived["twMethod"];
@@ -115,9 +125,12 @@ export function derive(rig: RigInput): Derived {
     }
   }
   const twNeed = hasTrailer && tw === undefined ? (twMeasureMissing.length ? twMeasureMissing.slice() : ["trailer.tongueWeight"]) : [];
-  const band = v.tongueShareBand
-    ? { min: v.tongueShareBand.min / 100, max: v.tongueShareBand.max / 100, source: "vehicle" as const }
-    : { ...TONGUE_BANDS[t?.type ?? "other"], source: "trailer-type" as const };
+  // A bed hitch has its own pin-weight band; the vehicle's band entered for a receiver does not apply to it.
+  const band: Derived["band"] = bedHitch
+    ? { ...BED_HITCH_BAND, source: "hitch-type" }
+    : v.tongueShareBand
+      ? { min: v.tongueShareBand.min / 100, max: v.tongueShareBand.max / 100, source: "vehicle" }
+      : { ...TONGUE_BANDS[t?.type ?? "other"], source: "trailer-type" };
 
   let hitchLoad: number | undefined;
   if (hasTrailer) hitchLoad = tw;
@@ -160,6 +173,12 @@ export function derive(rig: RigInput): Derived {
       overhang = pin + ext + a!.loadCenterFromPin;
       overhangFrom = "pin";
     }
+  } else if (bedHitch) {
+    // The pin weight acts at the bed hitch itself: no ball mount or extender lies between.
+    if (v.rearAxleToBedHitch !== undefined) {
+      overhang = v.rearAxleToBedHitch;
+      overhangFrom = "bed-hitch";
+    } else overhangNeed.push("vehicle.rearAxleToBedHitch");
   } else if (hasTrailer) {
     const len = rig.ballMount?.length;
     if (pin !== undefined && len !== undefined) {
@@ -178,6 +197,8 @@ export function derive(rig: RigInput): Derived {
     rig,
     hasTrailer,
     hasAccessory,
+    hitchType,
+    bedHitch,
     wdUsed,
     gtw: t?.grossTrailerWeight,
     tw,

@@ -12,6 +12,7 @@ import { checkAxleLoads } from "./checks/axle-loads";
 import { checkBallMount } from "./checks/ball-mount";
 import { checkCombinedWeight } from "./checks/combined-weight";
 import { checkEnvelope } from "./checks/envelope";
+import { checkFrontAxleLoss } from "./checks/front-axle-loss";
 import { checkPayload } from "./checks/payload";
 import { checkTongueMeasure } from "./checks/tongue-measure";
 import { checkTongueShare } from "./checks/tongue-share";
@@ -32,6 +33,11 @@ import type { Derived } from "./derive";
 export const DEFAULT_TIGHT_MARGIN_RATIO = 0.1;
 /** Default accessory reference arm, inches. Common practice, no published source. */
 export const DEFAULT_REFERENCE_ARM_IN = 10;
+/**
+ * Default share of the front axle's unhitched load it may lose before the front-axle check reads tight.
+ * Common practice, no published source; the organisation can set its own.
+ */
+export const DEFAULT_FRONT_AXLE_LOSS_LIMIT = 0.1;
 
 type CheckFn = (d: Derived, c: Ctx) => AnyCheckResult | null;
 
@@ -43,6 +49,7 @@ const CHECKS: ReadonlyArray<[CheckId, CheckFn]> = [
   ["payload", checkPayload],
   ["combined-weight", checkCombinedWeight],
   ["axle-loads", checkAxleLoads],
+  ["front-axle-loss", checkFrontAxleLoss],
   ["weight-distribution", checkWeightDistribution],
   ["ball-mount", checkBallMount],
   ["accessory-fit", checkAccessoryFit],
@@ -53,11 +60,13 @@ function context(rig: RigInput, options: EvaluateOptions | undefined, detail: bo
   const u = unitSet(rig.units);
   const t = options?.tightMarginRatio;
   const arm = options?.accessoryReferenceArm;
+  const loss = options?.frontAxleLossLimit;
   return {
     u,
     detail,
     tight: typeof t === "number" && Number.isFinite(t) ? Math.min(0.5, Math.max(0, t)) : DEFAULT_TIGHT_MARGIN_RATIO,
     referenceArm: typeof arm === "number" && Number.isFinite(arm) && arm > 0 ? Math.max(0.1, lengthIn(arm, u)) : DEFAULT_REFERENCE_ARM_IN,
+    frontLossLimit: typeof loss === "number" && Number.isFinite(loss) ? Math.min(0.5, Math.max(0.01, loss)) : DEFAULT_FRONT_AXLE_LOSS_LIMIT,
   };
 }
 

@@ -3,7 +3,7 @@
  * See docs/core.md.
  */
 export { CORE_VERSION } from "./version";
-export { evaluateRig, evaluateRigFast, evaluateRigSummary, DEFAULT_TIGHT_MARGIN_RATIO, DEFAULT_REFERENCE_ARM_IN } from "./evaluate";
+export { evaluateRig, evaluateRigFast, evaluateRigSummary, DEFAULT_TIGHT_MARGIN_RATIO, DEFAULT_REFERENCE_ARM_IN, DEFAULT_FRONT_AXLE_LOSS_LIMIT } from "./evaluate";
 export {
   rigInputSchema,
   parseRig,
@@ -13,6 +13,8 @@ export {
   RECEIVER_SIZES,
   BALL_SIZES,
   BRAKE_TYPES,
+  HITCH_TYPES,
+  type HitchType,
   LICENCE_CATEGORIES,
   type LicenceCategory,
   type RigInput,
@@ -28,7 +30,7 @@ export { compareWeightDistribution, type WdComparison, type WdSide } from "./com
 export { parseEvaluateRequest, parsePlace, type EvaluateRequest, type EvaluateDetail } from "./request";
 export { tongueWeightByScale, tongueWeightByBeam, tongueWeightByPublicScale, DIRECT_SCALE_LIMIT_LB, type MeasureResult, type AxlePair } from "./measure";
 export { GENERAL_CAUTIONS } from "./checks/verdict";
-export { TONGUE_BANDS, CLASS_MAX_GTW, COMMON_DROPS_IN } from "./reference";
+export { TONGUE_BANDS, BED_HITCH_BAND, CLASS_MAX_GTW, COMMON_DROPS_IN } from "./reference";
 export { KG_PER_LB, MM_PER_IN, type UnitSystem, type UnitString } from "./units";
 export * from "./types";
 export {

@@ -29,6 +29,12 @@ export const RECEIVER_SIZES = ["1-1/4", "2", "2-1/2", "3"] as const;
 export const BALL_SIZES = ["1-7/8", "2", "2-5/16", "3"] as const;
 export const BRAKE_TYPES = ["none", "surge", "electric", "other"] as const;
 /**
+ * How the trailer hitches: a ball coupler on a ball mount in the receiver behind the bumper, or a hitch in the
+ * bed over or ahead of the rear axle (a fifth wheel takes a kingpin, a gooseneck a ball). Not given: receiver.
+ */
+export const HITCH_TYPES = ["receiver", "fifth-wheel", "gooseneck"] as const;
+export type HitchType = (typeof HITCH_TYPES)[number];
+/**
  * Driving-licence categories the local rules know (Great Britain and the EU): B (a car), B with code 96, BE.
  * "other" is any other licence: the rules say "check the licence" for it.
  */
@@ -119,6 +125,13 @@ function rigShape<U extends UnitSystem>(units: U) {
        * rearAxleToPin where it can; a trailer rig whose ball mount length is unknown keeps it as the ball's figure.
        */
       rearAxleToHitch: l("vehicle.rearAxleToHitch", "Rear axle to ball (older inputs)", 10, 200),
+      /**
+       * Rear axle centre to the bed hitch's centre (the kingpin's or the gooseneck ball's), along the ground:
+       * positive behind the axle, negative ahead of it, zero straight over it.
+       */
+      rearAxleToBedHitch: l("vehicle.rearAxleToBedHitch", "Rear axle to the bed hitch (negative: ahead of the axle)", -60, 60),
+      /** The maker's tow rating for a fifth wheel or gooseneck, where it gives one apart from the conventional figure. */
+      towRatingBed: m("vehicle.towRatingBed", "Tow rating for a fifth wheel or gooseneck", 0, 40000),
       wdRequiredAbove: m("vehicle.wdRequiredAbove", "Weight distribution required above", 0, 40000),
       departureAngle: field(units, "vehicle.departureAngle", "Departure angle", "angle", 1, 60),
       tongueShareBand: z
@@ -146,13 +159,16 @@ function rigShape<U extends UnitSystem>(units: U) {
         pinToFascia: l("hitch.pinToFascia", "Pin hole to fascia", 0, 24),
         dValue: field(units, "hitch.dValue", "Tow bar D value", "force", 1, 200),
         sValue: m("hitch.sValue", "Tow ball S value (static vertical load)", 0, 6000),
+        bedGtwRating: m("hitch.bedGtwRating", "Bed hitch gross trailer weight rating", 0, 40000),
+        bedPinRating: m("hitch.bedPinRating", "Bed hitch pin weight rating", 0, 10000),
       })
       .optional(),
     trailer: z
       .object({
         type: z.enum(TRAILER_TYPES, { error: "Trailer type: choose one from the list." }),
+        hitchType: z.enum(HITCH_TYPES, { error: "Hitched by: choose a receiver, a fifth wheel or a gooseneck." }).optional(),
         grossTrailerWeight: m("trailer.grossTrailerWeight", "Gross trailer weight", 50, 30000),
-        tongueWeight: m("trailer.tongueWeight", "Tongue weight", 0, 6000),
+        tongueWeight: m("trailer.tongueWeight", "Tongue weight", 0, 10000),
         tongueWeightBasis: z.enum(["measured", "estimated"]).optional(),
         tongueMeasurement: z
           .object({
@@ -243,6 +259,11 @@ export const rigInputSchema = z
         message: "A rig carries a trailer or a hitch-mounted accessory, not both at once.",
       });
     }
+    // Geometry: a hitch point at or past the front axle cannot be a bed hitch; the likely slip is the sign.
+    const bed = rig.vehicle.rearAxleToBedHitch;
+    const wb = rig.vehicle.wheelbase;
+    if (bed !== undefined && wb !== undefined && -bed >= wb)
+      ctx.addIssue({ code: "custom", path: ["vehicle", "rearAxleToBedHitch"], message: "Rear axle to the bed hitch reaches the front axle: check the figure and its sign (negative is ahead of the rear axle)." });
     // The tongue carries part of the trailer, never more than all of it: a larger figure is a misreading.
     const t = rig.trailer;
     const gtw = t?.grossTrailerWeight;

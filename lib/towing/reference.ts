@@ -17,6 +17,13 @@ export const TONGUE_BANDS: Record<TrailerType, { min: number; max: number }> = {
   boat: { min: 0.07, max: 0.12 },
 };
 
+/** Pin (kingpin) weight share for a fifth wheel or gooseneck, as ratios. */
+export const BED_HITCH_BAND = {
+  // Source: GM owner's manual (fifth-wheel and gooseneck: 15–25 %)
+  min: 0.15,
+  max: 0.25,
+} as const;
+
 /** Maximum gross trailer weight (lb) by hitch class. */
 export const CLASS_MAX_GTW: Record<number, number> = {
   // Source: New York 15 NYCRR 57.3(c) (adopts SAE J684), every row

@@ -28,6 +28,7 @@ export const CHECK_IDS = [
   "payload",
   "combined-weight",
   "axle-loads",
+  "front-axle-loss",
   "weight-distribution",
   "ball-mount",
   "accessory-fit",
@@ -122,7 +123,8 @@ export interface TongueShareResult extends CheckResult {
   id: "tongue-share";
   share?: number;
   /** "place": the band of the place's rule set (a guideline, never over on its own). */
-  band: { min: number; max: number; source: "vehicle" | "trailer-type" | "place" };
+  /** "hitch-type": the fifth-wheel and gooseneck pin-weight band. */
+  band: { min: number; max: number; source: "vehicle" | "trailer-type" | "place" | "hitch-type" };
   /** Tongue weight estimated from the band when it was not weighed. */
   estimatedTongueWeight?: { low: Quantity; high: Quantity };
 }
@@ -145,6 +147,20 @@ export interface AxleLoadsResult extends CheckResult {
   unhitched?: AxleLoads;
   hitched?: AxleLoads;
   withWd?: AxleLoads;
+}
+
+export interface FrontAxleLossResult extends CheckResult {
+  id: "front-axle-loss";
+  /** Load the front axle loses as driven (negative: it gains). */
+  loss?: Quantity;
+  /** The loss as a share of the front axle's unhitched load. */
+  share?: number;
+  /** The limit as a share of the unhitched front axle (the organisation's setting). */
+  limitShare: number;
+  /** Where the loss comes from: statics, or the hitched weighing. */
+  basis?: "statics" | "weighed";
+  /** The loss left at the weight-distribution target, when weight distribution is not used but could be. */
+  lossAtWdTarget?: Quantity;
 }
 
 export interface WeightDistributionResult extends CheckResult {
@@ -233,6 +249,7 @@ export type AnyCheckResult =
   | TongueShareResult
   | TongueMeasureResult
   | AxleLoadsResult
+  | FrontAxleLossResult
   | WeightDistributionResult
   | BallMountResult
   | AccessoryFitResult
@@ -305,4 +322,9 @@ export interface EvaluateOptions {
    * "local-rules" check), the result records the set and its version, and texts use the place's words.
    */
   place?: Place;
+  /**
+   * Share of the front axle's unhitched load it may lose to the hitch load before the front-axle check reads
+   * tight. Default 0.1 (10 %). Range 0.01–0.5. Common practice, no published source.
+   */
+  frontAxleLossLimit?: number;
 }

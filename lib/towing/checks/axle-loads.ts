@@ -81,14 +81,16 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
     result.frontChange = qW(c, change.front);
     result.rearChange = qW(c, change.rear);
     if (c.detail) {
-      const ohLabel = d.hasAccessory ? "Rear axle to the load's centre" : "Rear axle to ball";
+      const ohLabel = d.hasAccessory ? "Rear axle to the load's centre" : d.bedHitch ? "Rear axle to the bed hitch (negative: ahead)" : "Rear axle to ball";
       // Geometry: the ball sits the extender's and the ball mount's length behind the pin hole.
       const ohNote =
         !d.hasAccessory && d.overhangFrom === "pin"
           ? `Rear axle to ball: ${fL(c, d.pin!)} to the pin hole + ${fL(c, rig.extender?.length ?? 0)} extender + ${fL(c, rig.ballMount!.length!)} ball mount = ${fL(c, d.overhang)}.`
           : d.overhangFrom === "ball-as-measured"
             ? "Rear axle to ball as measured on the rig (an older figure)."
-            : undefined;
+            : d.overhangFrom === "bed-hitch" && d.overhang <= 0
+              ? "The bed hitch sits over or ahead of the rear axle: the front axle loses nothing (ahead of the axle it gains), and the rear axle takes less than the pin weight."
+              : undefined;
       steps.push(
         {
           id: "front-change",
@@ -196,8 +198,10 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
   if (!c.detail) return result;
   result.steps = steps;
   const cautions = CAUTIONS.slice();
-  if (change && aw && aw.front > 0)
+  if (change && aw && aw.front > 0 && change.front < 0)
     cautions.push(`Hitched, the front axle carries ${fW(c, -change.front)} (${fP(-change.front / aw.front)}) less than unhitched.`);
+  else if (change && aw && aw.front > 0 && change.front > 0)
+    cautions.push(`Hitched, the front axle carries ${fW(c, change.front)} (${fP(change.front / aw.front)}) more than unhitched: the bed hitch sits ahead of the rear axle.`);
   if (d.wdUsed)
     cautions.push(
       wdState(d).restoration !== undefined
@@ -212,7 +216,7 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
   if (result.status === "over" && result.governing?.id === "vehicle.gawrRear")
     advice.push(
       `Move cargo forward in the vehicle, or ${TAKE_WEIGHT_OUT}.` +
-        (d.hasTrailer && !d.wdUsed && wdRatingsState(d) !== "exceeded"
+        (d.hasTrailer && !d.bedHitch && !d.wdUsed && wdRatingsState(d) !== "exceeded"
           ? " Weight distribution moves part of the load off the rear axle, if its ratings cover this trailer; it raises no GAWR."
           : ""),
     );
@@ -229,7 +233,9 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
         : `${g.label === "Rear GAWR" ? "The rear axle" : "The front axle"} has the least room: ${fW(c, result.actual.value / c.u.weightFactor)} of its ${fW(c, g.value / c.u.weightFactor)} ${g.label === "Rear GAWR" ? "rear" : "front"} GAWR.` +
           (result.status === "incomplete" ? " Some figures are missing." : "")
       : change
-        ? `The hitch load adds ${fW(c, change.rear)} to the rear axle and lifts ${fW(c, -change.front)} off the front; weigh the axles to compare with the GAWRs.`
+        ? change.front > 0
+          ? `The hitch load adds ${fW(c, change.rear)} to the rear axle and ${fW(c, change.front)} to the front; weigh the axles to compare with the GAWRs.`
+          : `The hitch load adds ${fW(c, change.rear)} to the rear axle and lifts ${fW(c, -change.front)} off the front; weigh the axles to compare with the GAWRs.`
         : "Enter the wheelbase, the overhang and the hitch load to work out the axle loads.";
   return result;
 }

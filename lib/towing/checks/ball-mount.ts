@@ -31,7 +31,8 @@ const CAUTIONS = [
 ];
 
 export function checkBallMount(d: Derived, c: Ctx): BallMountResult | null {
-  if (!d.hasTrailer) return null;
+  // A fifth wheel or gooseneck has no ball mount: the check does not apply.
+  if (!d.hasTrailer || d.bedHitch) return null;
   const { rig } = d;
   const recv = rig.hitch?.receiverHeight;
   const coupler = rig.trailer!.couplerHeight;

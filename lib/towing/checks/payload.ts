@@ -27,7 +27,7 @@ export function checkPayload(d: Derived, c: Ctx): CheckResult {
       if (rig.accessory!.loadWeight === undefined) missing.push(need("accessory.loadWeight"));
     }
   }
-  const hitchLabel = d.hasAccessory ? "Accessory and its load" : "Tongue weight";
+  const hitchLabel = d.hasAccessory ? "Accessory and its load" : d.bedHitch ? "Pin weight" : "Tongue weight";
   const hitchSym = d.hasAccessory ? "W_acc" : "TW";
   const result: CheckResult = {
     id: "payload",
@@ -159,6 +159,9 @@ export function checkPayload(d: Derived, c: Ctx): CheckResult {
   if (!c.detail) return result;
   result.steps = steps;
   const cautions = CAUTIONS.slice();
+  // The pin weight is counted once, as the hitch load: cargo entered for the bed leaves it out.
+  if (d.bedHitch)
+    cautions.push("The pin weight rides in the bed and comes out of the payload once, as counted here: the cargo entered is what else rides in the vehicle, without the pin weight. The bed hitch itself belongs in the hitch hardware.");
   if (!d.hardwareKnown && d.weighedTotal === undefined && hitched)
     cautions.push("The hitch hardware's weight was not entered and is counted as zero; a ball mount or weight-distribution head can weigh a good deal.");
   result.cautions = cautions;

@@ -13,6 +13,10 @@ const CAUTIONS = [
   "Weigh the tongue with the trailer loaded as it will travel and weight distribution released.",
 ];
 
+/** Said for a fifth wheel or gooseneck: its band, and where the vehicle's own figures come in. */
+const BED_BAND_CAUTION =
+  "A fifth wheel or gooseneck puts 15 to 25 % of the trailer on the pin (GM owner's manual); a tongue-weight band entered for the vehicle is for a receiver and is not used here. Where the vehicle's manual gives its own pin-weight figures, they win.";
+
 export function checkTongueShare(d: Derived, c: Ctx): TongueShareResult | null {
   if (!d.hasTrailer) return null;
   const { band, gtw, tw } = d;
@@ -21,7 +25,7 @@ export function checkTongueShare(d: Derived, c: Ctx): TongueShareResult | null {
   if (tw === undefined) missing.push(...needTongueWeight(d));
   const result: TongueShareResult = {
     id: "tongue-share",
-    title: "Tongue-weight share",
+    title: d.bedHitch ? "Pin-weight share" : "Tongue-weight share",
     status: "incomplete",
     band,
     message: "",
@@ -85,7 +89,9 @@ export function checkTongueShare(d: Derived, c: Ctx): TongueShareResult | null {
   if (!c.detail) return result;
   result.steps = steps;
   const note = tongueWeightNote(d, c);
-  result.cautions = note ? [...CAUTIONS, note] : CAUTIONS;
+  const cautions = d.bedHitch ? [...CAUTIONS, BED_BAND_CAUTION] : CAUTIONS.slice();
+  if (note) cautions.push(note);
+  result.cautions = cautions;
   const bandText = `${fP(band.min)} to ${fP(band.max)}`;
   const advice: string[] = [];
   if (low) advice.push("Move load forward in the trailer, ahead of its axle, until the tongue carries more; then weigh again.");
@@ -94,11 +100,12 @@ export function checkTongueShare(d: Derived, c: Ctx): TongueShareResult | null {
   for (const m of missing) advice.push(`${m.what}: ${m.where}.`);
   result.advice = advice;
   if (result.share !== undefined) {
+    const what = d.bedHitch ? "The pin" : "The tongue";
     result.message = low
-      ? `The tongue carries ${fP(result.share)} of the trailer, below the ${bandText} band: a sway risk.`
+      ? `${what} carries ${fP(result.share)} of the trailer, below the ${bandText} band: a sway risk.`
       : high
-        ? `The tongue carries ${fP(result.share)} of the trailer, above the ${bandText} band: it risks overloading the rear axle and lightening the steering; check the axle loads.`
-        : `The tongue carries ${fP(result.share)} of the trailer, inside the ${bandText} band.`;
+        ? `${what} carries ${fP(result.share)} of the trailer, above the ${bandText} band: it risks overloading the rear axle and lightening the steering; check the axle loads.`
+        : `${what} carries ${fP(result.share)} of the trailer, inside the ${bandText} band.`;
   } else if (result.estimatedTongueWeight && gtw !== undefined) {
     result.message = `Not weighed yet: a tongue weight of about ${fW(c, gtw * band.min)} to ${fW(c, gtw * band.max)} would fit the ${bandText} band.`;
   } else result.message = "Enter the trailer's gross weight and tongue weight.";

@@ -45,7 +45,47 @@ export function ratingSet(d: Derived): RatingSet {
   return (d.cache.ratingSet ??= buildRatingSet(d)) as RatingSet;
 }
 
+/**
+ * A fifth wheel or gooseneck in the bed: the vehicle's tow rating (its figure for a bed hitch when given), the
+ * bed hitch's own ratings, and the gooseneck ball, coupler or kingpin and chains when entered. The receiver's
+ * ratings, the vehicle's receiver tongue limit, a ball mount, an extender and weight distribution do not apply.
+ */
+function buildBedRatingSet(d: Derived): RatingSet {
+  const { rig, hitchType } = d;
+  const v = rig.vehicle;
+  const h = rig.hitch;
+  const t = rig.trailer!;
+  const gtw: RatingEntry[] = [];
+  const tw: RatingEntry[] = [];
+  const missing: MissingField[] = [];
+  const unchecked: string[] = [];
+  if (v.towRatingBed !== undefined)
+    gtw.push({ id: "vehicle.towRatingBed", label: "Vehicle tow rating for a fifth wheel or gooseneck", symbol: "R_veh", rating: v.towRatingBed });
+  else if (v.towRating !== undefined)
+    gtw.push({ id: "vehicle.towRating", label: "Vehicle tow rating", symbol: "R_veh", rating: v.towRating, note: "The vehicle's conventional tow rating is used: the owner's manual may give another figure for a fifth wheel or gooseneck; enter it." });
+  else missing.push(need("vehicle.towRatingBed"));
+  if (h?.bedGtwRating !== undefined) gtw.push({ id: "hitch.bedGtwRating", label: "Bed hitch rating", symbol: "R_bed", rating: h.bedGtwRating });
+  else missing.push(need("hitch.bedGtwRating"));
+  if (h?.bedPinRating !== undefined) tw.push({ id: "hitch.bedPinRating", label: "Bed hitch pin weight rating", symbol: "T_bed", rating: h.bedPinRating });
+  else missing.push(need("hitch.bedPinRating"));
+  const gooseneck = hitchType === "gooseneck";
+  if (gooseneck) {
+    if (t.ballRating !== undefined) gtw.push({ id: "trailer.ballRating", label: "Gooseneck ball rating", symbol: "R_ball", rating: t.ballRating });
+    else unchecked.push("gooseneck ball rating (stamped on the ball)");
+  }
+  if (t.couplerRating !== undefined)
+    gtw.push({ id: "trailer.couplerRating", label: gooseneck ? "Coupler rating" : "Kingpin rating", symbol: "R_coupler", rating: t.couplerRating });
+  else unchecked.push(gooseneck ? "coupler rating (stamped on the coupler)" : "kingpin or pin box rating (the trailer's label)");
+  if (gooseneck) {
+    if (t.safetyChainRating !== undefined)
+      gtw.push({ id: "trailer.safetyChainRating", label: "Safety chain rating (each chain)", symbol: "R_chain", rating: t.safetyChainRating });
+    else unchecked.push("safety chain rating (tag on each chain)");
+  }
+  return { gtw, tw, missing, unchecked };
+}
+
 function buildRatingSet(d: Derived): RatingSet {
+  if (d.bedHitch) return buildBedRatingSet(d);
   const { rig, wdUsed } = d;
   const v = rig.vehicle;
   const h = rig.hitch;
@@ -168,6 +208,21 @@ const CAUTIONS = [
   ...HITCHING_CAUTIONS,
 ];
 
+/** Hands-on cautions for a fifth wheel (common practice, no published source). */
+const FIFTH_WHEEL_CAUTIONS = [
+  "Every part between the vehicle and the trailer has its own rating; the lowest one is the limit for the whole rig.",
+  "Read the figures from the labels and stamps on the parts themselves; a catalogue figure may differ.",
+  "Check that the jaws have closed round the kingpin and the lock is set: look, then pull gently forward against the trailer's brakes.",
+  "Keep the pin box clear of the cab and the bed's sides in tight turns (a short bed may need a sliding hitch).",
+  HITCHING_CAUTIONS[1]!,
+  HITCHING_CAUTIONS[2]!,
+  HITCHING_CAUTIONS[3]!,
+];
+
+/** Said when a bed rig also carries receiver parts' figures: they are not used. */
+export const BED_HITCH_IGNORES =
+  "A fifth wheel or gooseneck rides in the bed: the receiver's ratings, a ball mount, an extender and weight distribution do not apply to it, and their figures are not used.";
+
 export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
   if (!d.hasTrailer) return null;
   const t = d.rig.trailer!;
@@ -182,7 +237,7 @@ export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
   const { links, statuses, governing, govActual, govLimit } = acc;
 
   // Ball and coupler must be the same size: a mismatch can let the trailer come off.
-  const sizeMismatch = t.ballSize !== undefined && t.couplerBallSize !== undefined && t.ballSize !== t.couplerBallSize;
+  const sizeMismatch = d.hitchType !== "fifth-wheel" && t.ballSize !== undefined && t.couplerBallSize !== undefined && t.ballSize !== t.couplerBallSize;
   // A set-up to change (fit the matching ball), not a rating exceeded.
   if (sizeMismatch) statuses.push("adjust");
 
@@ -242,7 +297,9 @@ export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
   result.steps = steps;
 
   const advice: string[] = [];
-  const cautions = CAUTIONS.slice();
+  const cautions = (d.hitchType === "fifth-wheel" ? FIFTH_WHEEL_CAUTIONS : CAUTIONS).slice();
+  if (d.bedHitch && (d.rig.ballMount || d.rig.extender || d.rig.weightDistribution?.used || d.rig.hitch?.gtwRating !== undefined || d.rig.hitch?.twRating !== undefined))
+    cautions.push(BED_HITCH_IGNORES);
   if (sizeMismatch) {
     advice.push(`Fit a ${t.couplerBallSize} in ball to match the coupler; the ${t.ballSize} in ball does not fit it safely.`);
   }
@@ -254,10 +311,10 @@ export function checkWeakestLink(d: Derived, c: Ctx): WeakestLinkResult | null {
   if (set.unchecked.length) cautions.push(`Not checked because no figure was entered: ${set.unchecked.join("; ")}.`);
   const twNote = tongueWeightNote(d, c);
   if (twNote) cautions.push(twNote);
-  if (d.rig.extender) cautions.push(...EXTENDER_CAUTIONS(d.wdUsed));
+  if (d.rig.extender && !d.bedHitch) cautions.push(...EXTENDER_CAUTIONS(d.wdUsed));
   const cls = d.rig.hitch?.class;
   const classMax = cls !== undefined ? CLASS_MAX_GTW[cls] : undefined;
-  if (classMax !== undefined && d.gtw !== undefined && d.gtw > classMax)
+  if (!d.bedHitch && classMax !== undefined && d.gtw !== undefined && d.gtw > classMax)
     cautions.push(`The class only sets a ceiling: class ${cls} goes up to ${fW(c, classMax)} (SAE J684), and this trailer is heavier. The hitch's own label gives its rating.`);
   result.advice = advice;
   result.cautions = cautions;

@@ -66,7 +66,13 @@ function buildWdState(d: Derived): WdState {
  */
 export function axlesWithWd(front0: number, rear0: number, tw: number, wheelbase: number, overhang: number, r: number) {
   const lost = (tw * overhang) / wheelbase;
-  return { front: front0 - lost + r * lost, rear: rear0 + tw + lost - r * lost, lost };
+  const left = lossLeftWithWd(lost, r);
+  return { front: front0 - left, rear: rear0 + tw + left, lost };
+}
+
+/** The front axle's lost load still lost with weight distribution at restoration `r`: (1 − r) · L. Statics. */
+export function lossLeftWithWd(lost: number, r: number): number {
+  return lost - r * lost;
 }
 
 interface NeedAcc {
@@ -101,7 +107,8 @@ const CAUTIONS = [
 ];
 
 export function checkWeightDistribution(d: Derived, c: Ctx): WeightDistributionResult | null {
-  if (!d.hasTrailer) return null;
+  // Weight distribution is a receiver hitch's: it does not apply to a fifth wheel or gooseneck.
+  if (!d.hasTrailer || d.bedHitch) return null;
   const { rig, gtw, tw } = d;
   const v = rig.vehicle;
   const h = rig.hitch;
