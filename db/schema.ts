@@ -36,6 +36,11 @@ export const organisations = sqliteTable("organisations", {
   units: text("units", { enum: ["imperial", "metric"] }).notNull().default("imperial"),
   /** A check whose margin is under this share of its limit is reported as tight. */
   tightMarginRatio: real("tight_margin_ratio").notNull().default(0.1),
+  /**
+   * Share of the front axle's unhitched load it may lose to the hitch load before the check reads tight.
+   * Common practice, no published source: 10 % unless the owner sets another.
+   */
+  frontAxleLossRatio: real("front_axle_loss_ratio").notNull().default(0.1),
   /** How long a new customer link works unless the person making it chooses otherwise. */
   linkLifetimeDays: integer("link_lifetime_days").notNull().default(180),
   /** Where the organisation works: a country code (lib/towing/rules/places.ts) and, where rules differ, a region. */

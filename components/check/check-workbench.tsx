@@ -55,6 +55,8 @@ export interface CheckWorkbenchProps {
   units: "imperial" | "metric";
   /** Organisation's setting, default 0.1. */
   tightMarginRatio?: number;
+  /** Organisation's front-axle loss limit, default 0.1 (common practice, no published source). */
+  frontAxleLossLimit?: number;
   /** Saved profiles to pick from (may be empty/undefined when signed out). */
   profiles?: {
     vehicles: Array<{ id: string; name: string; rig: Pick<RigInput, "units" | "vehicle" | "hitch" | "load"> }>;
@@ -71,7 +73,7 @@ export interface CheckWorkbenchProps {
   signedOut?: boolean;
 }
 
-export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio, profiles, onSave, onSaveVehicleProfile, signedOut, place: home }: CheckWorkbenchProps) {
+export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio, frontAxleLossLimit, profiles, onSave, onSaveVehicleProfile, signedOut, place: home }: CheckWorkbenchProps) {
   const [units, setUnits] = useState<UnitSystem>(startUnits);
   const [place, setPlace] = useState<PlaceChoice>(home ?? null);
   const glossary = (place && ruleSetFor(place)?.glossary) || "us";
@@ -276,7 +278,7 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
               </RigCard>
             </div>
 
-            <LiveVerdict control={control} kind={kind} tightMarginRatio={tightMarginRatio} place={place} onJump={jump} />
+            <LiveVerdict control={control} kind={kind} tightMarginRatio={tightMarginRatio} frontAxleLossLimit={frontAxleLossLimit} place={place} onJump={jump} />
 
             {onSave ? <SaveCheck onSave={saveWithErrors} getRig={currentRig} /> : null}
           </div>

@@ -22,6 +22,8 @@ export interface LiveVerdictProps {
   control: Control<RigFormValues, unknown, RigInput>;
   kind: HitchedKind;
   tightMarginRatio?: number;
+  /** The organisation's front-axle loss limit (common practice, no published source). */
+  frontAxleLossLimit?: number;
   place: PlaceChoice;
   onJump: (path: string) => void;
 }
@@ -39,12 +41,12 @@ function withoutLevelWord(message: string): string {
  * keystroke besides the field itself. Renders straight into the page grid: the phone's bar, the verdict
  * column and the side view are siblings there.
  */
-export function LiveVerdict({ control, kind, tightMarginRatio, place, onJump }: LiveVerdictProps) {
+export function LiveVerdict({ control, kind, tightMarginRatio, frontAxleLossLimit, place, onJump }: LiveVerdictProps) {
   const values = useWatch({ control }) as RigFormValues;
   const parsed = useMemo(() => parseCandidate(values, kind), [values, kind]);
   const evaluated = useMemo(
-    () => (parsed.ok ? { rig: parsed.rig, result: evaluateRig(parsed.rig, { tightMarginRatio, place: place ?? undefined }) } : null),
-    [parsed, tightMarginRatio, place],
+    () => (parsed.ok ? { rig: parsed.rig, result: evaluateRig(parsed.rig, { tightMarginRatio, frontAxleLossLimit, place: place ?? undefined }) } : null),
+    [parsed, tightMarginRatio, frontAxleLossLimit, place],
   );
   // While a figure is half-typed, the last rig that parsed stays on screen (kept as state, set while rendering).
   const [lastGood, setLastGood] = useState<{ rig: RigInput; result: RigResult } | null>(null);

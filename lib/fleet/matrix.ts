@@ -25,9 +25,12 @@ export function profilePart(profile: { units: UnitSystem; data: Record<string, u
   return "vehicle" in profile.data ? { vehicle, ...rest } : rest;
 }
 
-/** The verdict of one vehicle with one trailer or accessory, with its governing item and that item's margin. */
-export function evaluatePair(units: UnitSystem, vehicle: Partial<RigInput>, hitched: Partial<RigInput>, tightMarginRatio: number): MatrixCell {
-  const result = evaluateRigFast({ units, ...vehicle, ...hitched } as RigInput, { tightMarginRatio });
+/**
+ * The verdict of one vehicle with one trailer or accessory, with its governing item and that item's margin, at
+ * the organisation's tight threshold and front-axle loss limit.
+ */
+export function evaluatePair(units: UnitSystem, vehicle: Partial<RigInput>, hitched: Partial<RigInput>, tightMarginRatio: number, frontAxleLossLimit?: number): MatrixCell {
+  const result = evaluateRigFast({ units, ...vehicle, ...hitched } as RigInput, { tightMarginRatio, frontAxleLossLimit });
   const governing = result.governing;
   const margin = governing ? result.checks.find((check) => check.id === governing.checkId)?.margin : undefined;
   return {

@@ -10,7 +10,7 @@ import { getCurrentSession, sessionKey } from "./session";
 export interface AccessContext {
   user: { id: string; email: string; name: string };
   sessionId: string;
-  organisation: Pick<Organisation, "id" | "name" | "kind" | "units" | "tightMarginRatio" | "country" | "region">;
+  organisation: Pick<Organisation, "id" | "name" | "kind" | "units" | "tightMarginRatio" | "frontAxleLossRatio" | "country" | "region">;
   role: Role;
   /** Every organisation this person belongs to, for the switcher. */
   memberships: Array<{ organisationId: string; organisationName: string; role: Role }>;
@@ -27,6 +27,7 @@ function prepareMemberships(db: Database) {
       kind: organisations.kind,
       units: organisations.units,
       tightMarginRatio: organisations.tightMarginRatio,
+      frontAxleLossRatio: organisations.frontAxleLossRatio,
       country: organisations.country,
       region: organisations.region,
       role: memberships.role,
@@ -67,6 +68,7 @@ export const getAccess = cache(async (): Promise<AccessContext | null> => {
       kind: current.kind,
       units: current.units,
       tightMarginRatio: current.tightMarginRatio,
+      frontAxleLossRatio: current.frontAxleLossRatio,
       country: current.country,
       region: current.region,
     },

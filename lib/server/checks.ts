@@ -37,12 +37,12 @@ export function hitchedLabel(rig: RigInput): string {
 
 /**
  * Stores a check as an immutable snapshot. The result is computed here, on the server, with the
- * organisation's tight threshold: a client's own figures are never stored as if they were the core's.
+ * organisation's tight threshold and front-axle loss limit: a client's own figures are never stored as if they were the core's.
  */
 export async function saveCheck(access: AccessContext, input: SaveCheckInput): Promise<{ id: string; result: RigResult }> {
   if (!can(access.role, "checks.save")) throw new AccessDenied("checks.save");
   const place = input.place === undefined ? placeFrom(access.organisation.country, access.organisation.region) : (input.place ?? undefined);
-  const result = evaluateRig(input.rig, { tightMarginRatio: access.organisation.tightMarginRatio, place });
+  const result = evaluateRig(input.rig, { tightMarginRatio: access.organisation.tightMarginRatio, frontAxleLossLimit: access.organisation.frontAxleLossRatio, place });
   const vehicleLabel = input.rig.name?.trim() || (await matchVehicleProfileName(access, input.rig)) || "Typed vehicle";
   const id = newId();
   const db = await getDb();

@@ -253,7 +253,7 @@ async function prepareMatrix(access: AccessContext): Promise<MatrixCacheEntry> {
     listFleetProfiles(access, "trailers"),
     listFleetProfiles(access, "accessories"),
   ]);
-  const fingerprint = [units, access.organisation.tightMarginRatio, ...[vehicles, trailers, accessories].flatMap((list) => list.map((p) => `${p.id}:${p.updatedAt}`))].join("|");
+  const fingerprint = [units, access.organisation.tightMarginRatio, access.organisation.frontAxleLossRatio, ...[vehicles, trailers, accessories].flatMap((list) => list.map((p) => `${p.id}:${p.updatedAt}`))].join("|");
   const key = access.organisation.id;
   const cached = matrixCache.get(key);
   if (cached && cached.fingerprint === fingerprint) return cached;
@@ -274,7 +274,7 @@ async function prepareMatrix(access: AccessContext): Promise<MatrixCacheEntry> {
 }
 
 /** Every pair of the fleet, evaluated once per change of any profile; yields between slices of vehicles. */
-function evaluateAll(entry: MatrixCacheEntry, units: UnitSystem, ratio: number): Promise<MatrixCell[]> {
+function evaluateAll(entry: MatrixCacheEntry, units: UnitSystem, ratio: number, frontLoss: number): Promise<MatrixCell[]> {
   if (entry.cells) return Promise.resolve(entry.cells);
   entry.computing ??= (async () => {
     const { vehicles, hitched } = entry.prepared;
@@ -282,7 +282,7 @@ function evaluateAll(entry: MatrixCacheEntry, units: UnitSystem, ratio: number):
     const cells = new Array<MatrixCell>(vehicles.length * width);
     const slice = Math.max(1, Math.floor(5_000 / Math.max(1, width)));
     for (let r = 0; r < vehicles.length; r++) {
-      for (let c = 0; c < width; c++) cells[r * width + c] = evaluatePair(units, vehicles[r]!.part, hitched[c]!.part, ratio);
+      for (let c = 0; c < width; c++) cells[r * width + c] = evaluatePair(units, vehicles[r]!.part, hitched[c]!.part, ratio, frontLoss);
       if (r % slice === slice - 1) await new Promise((resolve) => setImmediate(resolve));
     }
     entry.cells = cells;
@@ -307,6 +307,7 @@ export async function fleetMatrix(access: AccessContext, query: MatrixQuery): Pr
   const { vehicles, hitched } = entry.prepared;
   const units = access.organisation.units;
   const ratio = access.organisation.tightMarginRatio;
+  const frontLoss = access.organisation.frontAxleLossRatio;
   const width = hitched.length;
   const needle = (text: string | undefined) => text?.toLowerCase() ?? "";
   const vehicleNeedle = needle(query.vehicle);
@@ -317,11 +318,11 @@ export async function fleetMatrix(access: AccessContext, query: MatrixQuery): Pr
   let evaluated = 0;
   const full = Boolean(entry.cells) || Boolean(query.level) || vehicles.length * width <= FULL_EVALUATION_LIMIT;
   if (full && !entry.cells) {
-    evaluated = (await evaluateAll(entry, units, ratio)).length;
+    evaluated = (await evaluateAll(entry, units, ratio, frontLoss)).length;
   } else if (!entry.cells) {
     // A large fleet's first page answers at once; the rest is worked out in the background, in slices that
     // leave the server free, so a verdict filter or the counts are ready soon after.
-    void evaluateAll(entry, units, ratio).catch(() => undefined);
+    void evaluateAll(entry, units, ratio, frontLoss).catch(() => undefined);
   }
   let counts: MatrixPage["counts"] = null;
   if (entry.cells) {

@@ -25,6 +25,7 @@ export async function updateOrganisationSettings(access: AccessContext, input: O
       name: input.name,
       units: input.units,
       tightMarginRatio: input.tightMarginPercent / 100,
+      frontAxleLossRatio: input.frontAxleLossPercent / 100,
       linkLifetimeDays: input.linkLifetimeDays,
       country: input.country ?? null,
       region: input.country ? (input.region ?? null) : null,

@@ -100,6 +100,11 @@ export const organisationSettingsSchema = z.object({
     .number({ error: "Enter a percentage." })
     .min(1, "Use at least 1 %.")
     .max(50, "Use at most 50 %."),
+  /** Common practice, no published source: the share of the unhitched front axle it may lose to the hitch load. */
+  frontAxleLossPercent: z.coerce
+    .number({ error: "Enter a percentage." })
+    .min(1, "Use at least 1 %.")
+    .max(50, "Use at most 50 %."),
   linkLifetimeDays: z.coerce
     .number({ error: "Enter a number of days." })
     .int("Use whole days.")

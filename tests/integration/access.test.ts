@@ -40,7 +40,7 @@ const ACTIONS_ON_A: Array<{ name: string; allowed: Person[]; run: () => Promise<
   {
     name: "change the organisation's settings",
     allowed: ["ownerA"],
-    run: () => saveSettings(initialFormState, form({ name: "Renamed", units: "metric", tightMarginPercent: "12", linkLifetimeDays: "180" })),
+    run: () => saveSettings(initialFormState, form({ name: "Renamed", units: "metric", tightMarginPercent: "12", frontAxleLossPercent: "12", linkLifetimeDays: "180" })),
   },
 ];
 
@@ -112,7 +112,7 @@ describe("server actions refuse who may not use them, and write nothing", () => 
   it("bad input gets field errors and writes nothing", async () => {
     await actAs("ownerA");
     const before = await snapshot();
-    const state = await saveSettings(initialFormState, form({ name: "", units: "furlongs", tightMarginPercent: "1e309", linkLifetimeDays: "180" }));
+    const state = await saveSettings(initialFormState, form({ name: "", units: "furlongs", tightMarginPercent: "1e309", frontAxleLossPercent: "10", linkLifetimeDays: "180" }));
     expect(state.ok).toBe(false);
     expect(Object.keys(state.fieldErrors ?? {}).sort()).toEqual(["name", "tightMarginPercent", "units"]);
     const inviteState = await invite(initialFormState, form({ email: "<script>@x", role: "admin" }));

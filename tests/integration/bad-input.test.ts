@@ -211,11 +211,12 @@ const TARGETS: Target[] = [
       { path: "name", kind: "requiredText", required: true },
       { path: "units", kind: "enum", required: true },
       { path: "tightMarginPercent", kind: "formNumber", required: true },
+      { path: "frontAxleLossPercent", kind: "formNumber", required: true },
       { path: "linkLifetimeDays", kind: "formNumber", required: true },
       { path: "country", kind: "enum", accepts: ["empty string"] },
       { path: "region", kind: "enum", accepts: ["empty string"] },
     ],
-    base: () => ({ name: "Alder Lane Hitch", units: "imperial", tightMarginPercent: "10", linkLifetimeDays: "180", country: "US", region: "TX" }),
+    base: () => ({ name: "Alder Lane Hitch", units: "imperial", tightMarginPercent: "10", frontAxleLossPercent: "10", linkLifetimeDays: "180", country: "US", region: "TX" }),
     call: (input) => fromAction(() => saveSettings(initialFormState, input as FormData)),
   },
   {

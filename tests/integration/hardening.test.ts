@@ -84,7 +84,7 @@ const sha256 = (value: string) => createHash("sha256").update(value).digest("hex
 const OWNER_OF_B: AccessContext = {
   ...OWNER_OF_A,
   user: { id: PEOPLE.ownerB.id, email: "ownerb@example.com", name: "ownerB" },
-  organisation: { id: ORG_B, name: "Birchmoor Fleet", kind: "fleet", units: "imperial", tightMarginRatio: 0.1, country: null, region: null },
+  organisation: { id: ORG_B, name: "Birchmoor Fleet", kind: "fleet", units: "imperial", tightMarginRatio: 0.1, frontAxleLossRatio: 0.1, country: null, region: null },
   memberships: [{ organisationId: ORG_B, organisationName: "Birchmoor Fleet", role: "owner" }],
 };
 
@@ -310,11 +310,11 @@ describe("customer links", () => {
     expect(Math.abs(link.expiresAt!.getTime() - (Date.now() + 180 * DAY))).toBeLessThan(60_000);
 
     await actAs("ownerA");
-    const saved = await saveSettings(initialFormState, form({ name: "Alder Lane Hitch", units: "imperial", tightMarginPercent: "10", linkLifetimeDays: "90" }));
+    const saved = await saveSettings(initialFormState, form({ name: "Alder Lane Hitch", units: "imperial", tightMarginPercent: "10", frontAxleLossPercent: "10", linkLifetimeDays: "90" }));
     expect(saved.ok).toBe(true);
     const made = await createLinkAction(initialFormState, form({ checkId }));
     expect(Math.abs(new Date(made.expiresAt!).getTime() - (Date.now() + 90 * DAY))).toBeLessThan(60_000);
-    const refused = await saveSettings(initialFormState, form({ name: "Alder Lane Hitch", units: "imperial", tightMarginPercent: "10", linkLifetimeDays: "0" }));
+    const refused = await saveSettings(initialFormState, form({ name: "Alder Lane Hitch", units: "imperial", tightMarginPercent: "10", frontAxleLossPercent: "10", linkLifetimeDays: "0" }));
     expect(refused.fieldErrors?.linkLifetimeDays?.length).toBeGreaterThan(0);
   });
 

@@ -27,7 +27,7 @@ import { initialFormState } from "@/lib/validation/form-state";
 import { actAs, buildFixture, form } from "./support/fixture";
 
 const camper = JSON.parse(readFileSync("tests/fixtures/rigs/camper-on-pickup.json", "utf8"));
-const ORG_SETTINGS = { name: "Alder Lane Hitch", units: "metric", tightMarginPercent: "10", linkLifetimeDays: "180" };
+const ORG_SETTINGS = { name: "Alder Lane Hitch", units: "metric", tightMarginPercent: "10", frontAxleLossPercent: "10", linkLifetimeDays: "180" };
 
 beforeAll(async () => {
   await buildFixture();

@@ -54,6 +54,7 @@ export default async function CheckPage({ searchParams }: { searchParams: Promis
         initialRig={initialRig}
         units={initialRig?.units ?? access.organisation.units}
         tightMarginRatio={access.organisation.tightMarginRatio}
+        frontAxleLossLimit={access.organisation.frontAxleLossRatio}
         place={source?.result.rules?.place ?? placeFrom(access.organisation.country, access.organisation.region)}
         profiles={profiles}
         onSave={can(access.role, "checks.save") ? saveCheckAction : undefined}

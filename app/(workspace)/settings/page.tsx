@@ -20,6 +20,7 @@ export default async function SettingsPage() {
               name: organisation.name,
               units: organisation.units,
               tightMarginPercent: Math.round(organisation.tightMarginRatio * 1000) / 10,
+              frontAxleLossPercent: Math.round(organisation.frontAxleLossRatio * 1000) / 10,
               linkLifetimeDays: lifetime,
               country: organisation.country ?? "",
               region: organisation.region ?? "",

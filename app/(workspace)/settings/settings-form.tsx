@@ -9,6 +9,7 @@ export interface SettingsDefaults {
   name: string;
   units: "imperial" | "metric";
   tightMarginPercent: number;
+  frontAxleLossPercent: number;
   linkLifetimeDays: number;
   country: string;
   region: string;
@@ -80,6 +81,14 @@ export function SettingsForm({ defaults }: { defaults: SettingsDefaults }) {
         required
       >
         <NumberInput unit="%" {...form.register("tightMarginPercent")} />
+      </Field>
+      <Field
+        label="Front axle may lose at most"
+        help="A share of the front axle's load unhitched. Beyond it the check reads tight and suggests weight distribution. 10 % is common practice, with no published source; the vehicle maker's own figure wins."
+        error={errorOf("frontAxleLossPercent")}
+        required
+      >
+        <NumberInput unit="%" {...form.register("frontAxleLossPercent")} />
       </Field>
       <Field
         label="Customer links work for"

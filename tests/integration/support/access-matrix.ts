@@ -47,7 +47,7 @@ export async function actAsActor(actor: Actor) {
 export const OWNER_OF_A: AccessContext = {
   user: { id: PEOPLE.ownerA.id, email: "ownera@example.com", name: "ownerA" },
   sessionId: "fixture",
-  organisation: { id: ORG_A, name: "Alder Lane Hitch", kind: "shop", units: "imperial", tightMarginRatio: 0.1, country: null, region: null },
+  organisation: { id: ORG_A, name: "Alder Lane Hitch", kind: "shop", units: "imperial", tightMarginRatio: 0.1, frontAxleLossRatio: 0.1, country: null, region: null },
   role: "owner",
   memberships: [{ organisationId: ORG_A, organisationName: "Alder Lane Hitch", role: "owner" }],
 };

@@ -27,10 +27,19 @@ describe("auth input", () => {
   });
 
   it("keeps the tight threshold between 1 % and 50 % and refuses what is not a number", () => {
-    const base = { name: "Quillfield", units: "metric", linkLifetimeDays: "180" };
+    const base = { name: "Quillfield", units: "metric", frontAxleLossPercent: "10", linkLifetimeDays: "180" };
     expect(organisationSettingsSchema.safeParse({ ...base, tightMarginPercent: "10" }).success).toBe(true);
     for (const bad of ["0", "51", "abc", "1e309", "NaN"]) {
       expect(organisationSettingsSchema.safeParse({ ...base, tightMarginPercent: bad }).success, bad).toBe(false);
+    }
+  });
+
+  it("keeps the front-axle loss limit between 1 % and 50 % and refuses what is not a number", () => {
+    const base = { name: "Quillfield", units: "metric", tightMarginPercent: "10", linkLifetimeDays: "180" };
+    expect(organisationSettingsSchema.safeParse({ ...base, frontAxleLossPercent: "10" }).success).toBe(true);
+    expect(organisationSettingsSchema.safeParse({ ...base, frontAxleLossPercent: "50" }).success).toBe(true);
+    for (const bad of [undefined, "0", "51", "abc", "1e309", "NaN"]) {
+      expect(organisationSettingsSchema.safeParse({ ...base, frontAxleLossPercent: bad }).success, String(bad)).toBe(false);
     }
   });
 

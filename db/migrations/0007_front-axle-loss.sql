@@ -1,0 +1,1 @@
+ALTER TABLE `organisations` ADD `front_axle_loss_ratio` real DEFAULT 0.1 NOT NULL;
