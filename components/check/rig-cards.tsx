@@ -8,7 +8,7 @@ import { useId, type ReactNode } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
 import { Field, Select, cn } from "@/components/ui";
 import { formatQuantity } from "@/lib/format";
-import { ACCESSORY_TYPES, BALL_SIZES, BRAKE_TYPES, RECEIVER_SIZES, TRAILER_TYPES, type AccessoryType, type TrailerType } from "@/lib/towing";
+import { ACCESSORY_TYPES, BALL_SIZES, BRAKE_TYPES, RECEIVER_SIZES, TRAILER_TYPES, type AccessoryType, type HitchType, type TrailerType } from "@/lib/towing";
 import { TermHelp } from "@/components/glossary/term-help";
 import { ChoiceField, FieldGrid, FieldGroup, MoreMeasurements, NumField, unitFor, useGlossary, useUnits, YesNoField } from "./field-parts";
 import type { GlossaryId } from "@/lib/towing/rules/types";
@@ -30,6 +30,19 @@ export const ACCESSORY_TYPE_LABELS: Record<AccessoryType, string> = {
   "cargo-carrier": "Cargo carrier",
   other: "Other",
 };
+
+/** How the trailer hitches; not given is a ball mount in the receiver. */
+export const HITCH_TYPE_LABELS: Record<Exclude<HitchType, "receiver">, string> = {
+  "fifth-wheel": "Fifth wheel in the bed (kingpin)",
+  gooseneck: "Gooseneck in the bed (ball)",
+};
+
+/** True when the form's trailer rides on a fifth wheel or gooseneck in the bed. */
+function useBedHitch(): boolean {
+  const { control } = useFormContext<RigFormValues>();
+  const type = useWatch({ control, name: "trailer.hitchType" });
+  return type === "fifth-wheel" || type === "gooseneck";
+}
 
 const BRAKE_LABELS: Record<(typeof BRAKE_TYPES)[number], string> = { none: "None", surge: "Surge", electric: "Electric", other: "Other" };
 
@@ -189,6 +202,7 @@ export function VehicleFields({ tools }: { tools?: ReactNode }) {
         <FieldGrid>
           <NumField name="vehicle.wheelbase" label="Wheelbase" kind="length" help="Front wheel centre to rear wheel centre." />
           <NumField name="vehicle.rearAxleToPin" label="Rear axle to pin hole" kind="length" help={<TermHelp term="overhang">Along the ground from the rear axle centre to the receiver pin hole: the installer&rsquo;s figure after fitting. The ball mount&rsquo;s length and any extender are added to reach the ball.</TermHelp>} />
+          <NumField name="vehicle.rearAxleToBedHitch" label="Rear axle to bed hitch" kind="length" help={<TermHelp term="bed-hitch">Fifth wheel or gooseneck only: along the ground from the rear axle centre to the kingpin&rsquo;s or ball&rsquo;s centre. Negative when it sits ahead of the axle, 0 straight over it.</TermHelp>} />
         </FieldGrid>
       </FieldGroup>
       <FieldGroup title="Load in the vehicle" note="What rides along when it tows. Ask, or weigh.">
@@ -202,6 +216,7 @@ export function VehicleFields({ tools }: { tools?: ReactNode }) {
         <FieldGrid>
           <NumField name="vehicle.towRatingWd" label="Tow rating with weight distribution" kind="mass" help="Owner's manual, towing section." />
           <NumField name="vehicle.tongueWeightLimitWd" label="Tongue-weight limit with weight distribution" kind="mass" help="Owner's manual, towing section." />
+          <NumField name="vehicle.towRatingBed" label="Tow rating for a fifth wheel or gooseneck" kind="mass" help={<TermHelp term="bed-hitch">Owner&rsquo;s manual, towing section, where the maker gives its own figure for a bed hitch.</TermHelp>} />
           <NumField name="vehicle.wdRequiredAbove" label="Weight distribution required above" kind="mass" help={<TermHelp term="weight-distribution">Owner&rsquo;s manual: the trailer weight above which the maker requires it.</TermHelp>} />
           <NumField name="vehicle.payloadLabel" label="Payload on the label" kind="mass" help={<TermHelp term="payload">Tyre and loading label on the door jamb: the combined weight of occupants and cargo.</TermHelp>} />
           <NumField name="vehicle.departureAngle" label="Departure angle" kind="angle" help={<TermHelp term="departure-angle">Owner&rsquo;s manual, dimensions page.</TermHelp>} />
@@ -230,8 +245,17 @@ export function VehicleFields({ tools }: { tools?: ReactNode }) {
 }
 
 export function HitchFields({ kind }: { kind: HitchedKind }) {
+  const bed = useBedHitch() && kind === "trailer";
   return (
     <>
+      {bed ? (
+        <FieldGroup title="Bed hitch" note="The fifth wheel's or gooseneck's own label. The receiver, a ball mount, an extender and weight distribution do not apply to it.">
+          <FieldGrid>
+            <NumField name="hitch.bedGtwRating" label="Bed hitch GTW rating" kind="mass" help={<TermHelp term="bed-hitch">Label on the fifth wheel or gooseneck hitch: gross trailer weight.</TermHelp>} />
+            <NumField name="hitch.bedPinRating" label="Bed hitch pin weight rating" kind="mass" help={<TermHelp term="pin-weight">Label on the fifth wheel or gooseneck hitch: the vertical (pin) load.</TermHelp>} />
+          </FieldGrid>
+        </FieldGroup>
+      ) : null}
       <FieldGroup title="Receiver" note="Ratings from the hitch's own label or stamp; heights and distances with a tape measure.">
         <div className="flex flex-col gap-4 sm:flex-row sm:items-start">
           <FieldGrid className="flex-1">
@@ -259,7 +283,7 @@ export function HitchFields({ kind }: { kind: HitchedKind }) {
           </MoreMeasurements>
         </div>
       </FieldGroup>
-      {kind === "trailer" ? (
+      {kind === "trailer" && !bed ? (
         <FieldGroup title="Ball mount" note="Stamped on the ball mount; rise or drop and length with a tape measure.">
           <FieldGrid>
             <NumField name="ballMount.drop" label="Drop (negative for a rise)" kind="length" help={<TermHelp term="ball-platform">Top of the shank down to the top of the ball platform. A rise is a negative figure.</TermHelp>} />
@@ -274,6 +298,7 @@ export function HitchFields({ kind }: { kind: HitchedKind }) {
           </div>
         </FieldGroup>
       ) : null}
+      {bed ? null : (
       <FieldGroup title="Extender" note="Only if one is fitted: its own label gives its rating, often lower than the hitch's.">
         <FieldGrid>
           <NumField name="extender.length" label="Extender length" kind="length" help={<TermHelp term="extender">How far it moves the pin hole back.</TermHelp>} />
@@ -281,6 +306,7 @@ export function HitchFields({ kind }: { kind: HitchedKind }) {
           <NumField name="extender.gtwRating" label="Extender GTW rating" kind="mass" help="The extender's label, if it gives one." />
         </FieldGrid>
       </FieldGroup>
+      )}
     </>
   );
 }
@@ -364,14 +390,16 @@ const LICENCE_OPTIONS = [
 
 export function TrailerFields({ tools }: { tools?: ReactNode }) {
   const glossary = useGlossary();
+  const bed = useBedHitch();
   return (
     <>
       {tools}
       <FieldGroup title="Trailer">
         <FieldGrid>
           <ChoiceField name="trailer.type" label="Trailer type" options={TRAILER_TYPES.map((t) => ({ value: t, label: TRAILER_TYPE_LABELS[t] }))} help="Sets the usual tongue-weight band." />
+          <ChoiceField name="trailer.hitchType" label="Hitched by" emptyLabel="Ball mount in the receiver" options={(Object.keys(HITCH_TYPE_LABELS) as Array<keyof typeof HITCH_TYPE_LABELS>).map((t) => ({ value: t, label: HITCH_TYPE_LABELS[t] }))} help={<TermHelp term="bed-hitch">A fifth wheel or gooseneck sits in the bed over or ahead of the rear axle; its pin weight is usually 15 to 25 % of the trailer.</TermHelp>} />
           <NumField name="trailer.grossTrailerWeight" label="Gross trailer weight" kind="mass" help={<TermHelp term="gross-trailer-weight">Loaded as it will travel: a public scale, or the trailer&rsquo;s own GVWR as the upper bound.</TermHelp>} />
-          <NumField name="trailer.tongueWeight" label="Tongue weight" kind="mass" help={<TermHelp term="tongue-weight">A tongue scale, a bathroom scale and beam, or the difference at a public scale; spring bars released.</TermHelp>} />
+          <NumField name="trailer.tongueWeight" label={bed ? "Pin weight" : "Tongue weight"} kind="mass" help={<TermHelp term="tongue-weight">A tongue scale, a bathroom scale and beam, or the difference at a public scale; spring bars released.</TermHelp>} />
           <TongueBasis />
           <NumField name="trailer.mam" label={PLATE_LABEL[glossary]} kind="mass" help="The most the trailer may weigh loaded, from its plate or papers: licences and the coupling's D value read it." />
         </FieldGrid>
@@ -395,6 +423,7 @@ export function TrailerFields({ tools }: { tools?: ReactNode }) {
           <NumField name="trailer.couplingDValue" label="Coupler D value (marked)" kind="force" help="On the coupler's plate, in kN, where it is built to UN Regulation No. 55." />
         </FieldGrid>
       </FieldGroup>
+      {bed ? null : (
       <FieldGroup title="Weight distribution" note="Front fender height: ground to the lip of the front wheel opening, straight above the wheel centre, on level ground. Unhitched, hitched with the spring bars released, then hitched with the bars set. Chock the trailer first.">
         <div className="space-y-4">
           <WdUsed />
@@ -407,6 +436,7 @@ export function TrailerFields({ tools }: { tools?: ReactNode }) {
           <FenderDiagram />
         </div>
       </FieldGroup>
+      )}
       <MoreMeasurements>
         <NumField name="weightDistribution.restorationTarget" label="Front restoration target" kind="percent" help={<TermHelp term="restoration">Share of the lost front-axle load to give back; the owner&rsquo;s manual may set it (often 50 %).</TermHelp>} />
         <FieldGroup title="Tongue weighed with a scale" note="A scale straight under the jack, or a bathroom scale under a beam resting on a block. Chock the trailer&rsquo;s wheels before lifting the tongue off the ball.">

@@ -80,9 +80,13 @@ export function toRigCandidate(values: RigFormValues, kind: HitchedKind): unknow
   if (kind === "trailer") {
     const trailer = isPlain(v.trailer) ? prune(v.trailer) : undefined;
     out.trailer = { type: "travel", ...trailer };
-    const mount = isPlain(v.ballMount) ? prune(v.ballMount) : undefined;
+    // A fifth wheel or gooseneck has no ball mount, extender or weight distribution: what was typed for a
+    // receiver stays in the form (switching back keeps it) but does not go into the rig.
+    const bed = trailer?.hitchType === "fifth-wheel" || trailer?.hitchType === "gooseneck";
+    if (bed) delete out.extender;
+    const mount = !bed && isPlain(v.ballMount) ? prune(v.ballMount) : undefined;
     if (mount) out.ballMount = mount;
-    const wd = isPlain(v.weightDistribution) ? prune(v.weightDistribution) : undefined;
+    const wd = !bed && isPlain(v.weightDistribution) ? prune(v.weightDistribution) : undefined;
     // An unticked box alone says nothing; with figures beside it, it says "measured, not used".
     if (wd && !(Object.keys(wd).length === 1 && wd.used === false)) out.weightDistribution = { used: false, ...wd };
   } else {

@@ -3,7 +3,7 @@
  * label. One list drives the forms, the CSV template, the import mapping and the export, so they never drift.
  * Pure: no server code, no React.
  */
-import { ACCESSORY_TYPES, BALL_SIZES, BRAKE_TYPES, FIELD_RANGES, RECEIVER_SIZES, TRAILER_TYPES } from "../towing/input";
+import { ACCESSORY_TYPES, BALL_SIZES, BRAKE_TYPES, FIELD_RANGES, HITCH_TYPES, RECEIVER_SIZES, TRAILER_TYPES } from "../towing/input";
 
 export const PROFILE_KINDS = ["vehicles", "trailers", "accessories"] as const;
 export type ProfileKind = (typeof PROFILE_KINDS)[number];
@@ -60,6 +60,7 @@ export const VEHICLE_FIELDS: ProfileField[] = [
   num("vehicle.towRatingWd", "tow_max_wd", "Ratings", "The maker's figure with weight distribution, if it gives one."),
   num("vehicle.tongueWeightLimit", "tongue_max", "Ratings", "Owner's manual, towing section."),
   num("vehicle.tongueWeightLimitWd", "tongue_max_wd", "Ratings"),
+  num("vehicle.towRatingBed", "tow_max_bed_hitch", "Ratings", "The maker's figure for a fifth wheel or gooseneck, where it gives one apart from the conventional figure."),
   num("vehicle.wdRequiredAbove", "wd_needed_above", "Ratings", "The trailer weight above which the maker requires weight distribution."),
   num("vehicle.curbWeight", "curb_weight", "Weights", "Weighed empty with a full tank, or the maker's figure."),
   num("vehicle.payloadLabel", "payload_on_label", "Weights", "The tire and loading label's \"combined weight of occupants and cargo\"."),
@@ -67,6 +68,7 @@ export const VEHICLE_FIELDS: ProfileField[] = [
   num("vehicle.axleWeights.rear", "weighed_rear", "Weights", "Weighed unhitched, loaded as it travels."),
   num("vehicle.wheelbase", "wheelbase", "Measurements", "Centre of the front wheel to centre of the rear wheel."),
   num("vehicle.rearAxleToPin", "axle_to_pin", "Measurements", "Rear axle centre to the receiver pin hole, along the ground: the installer's figure after fitting. The ball mount's length and any extender are added to reach the ball."),
+  num("vehicle.rearAxleToBedHitch", "axle_to_bed_hitch", "Measurements", "Fifth wheel or gooseneck only: rear axle centre to the kingpin's or ball's centre, along the ground; negative when it sits ahead of the axle."),
   num("vehicle.departureAngle", "departure_angle", "Measurements", "Owner's manual, dimensions page (the angle as 49 CFR 523.2 defines it)."),
   { path: "hitch.class", column: "hitch_class", label: "Hitch class", type: "integer", choices: ["1", "2", "3", "4", "5"], group: "Hitch", help: "On the hitch's label. The class sets a ceiling; the label's own rating governs (\"Class 5\" is trade usage)." },
   choice("hitch.receiverSize", "receiver_opening", "Receiver size (in)", RECEIVER_SIZES, "Hitch"),
@@ -74,6 +76,8 @@ export const VEHICLE_FIELDS: ProfileField[] = [
   num("hitch.twRating", "hitch_tw", "Hitch", "On the hitch's own label."),
   num("hitch.gtwRatingWd", "hitch_gtw_wd", "Hitch"),
   num("hitch.twRatingWd", "hitch_tw_wd", "Hitch"),
+  num("hitch.bedGtwRating", "bed_hitch_gtw", "Hitch", "The fifth wheel's or gooseneck's own label."),
+  num("hitch.bedPinRating", "bed_hitch_pin", "Hitch", "The fifth wheel's or gooseneck's own label: the vertical (pin) load."),
   num("hitch.receiverHeight", "receiver_height", "Hitch", "Measured after fitting: ground to the top inside of the opening, loaded."),
   num("hitch.pinToFascia", "pin_to_fascia", "Hitch", "Measured after fitting: pin hole to the outermost point of the bumper."),
   num("load.occupants", "usual_occupants", "Usual load"),
@@ -83,6 +87,7 @@ export const VEHICLE_FIELDS: ProfileField[] = [
 
 export const TRAILER_FIELDS: ProfileField[] = [
   choice("trailer.type", "trailer_kind", "Trailer type", TRAILER_TYPES, "Trailer"),
+  { ...choice("trailer.hitchType", "hitched_by", "Hitched by", HITCH_TYPES, "Trailer"), help: "receiver (a ball mount in the receiver, when not given), fifth-wheel or gooseneck." },
   num("trailer.grossTrailerWeight", "gross_weight", "Trailer", "Weighed loaded, or the trailer's own GVWR when unknown."),
   num("trailer.tongueWeight", "tongue_weight", "Trailer", "Weighed at the coupler, loaded."),
   choice("trailer.tongueWeightBasis", "tongue_weight_basis", "Tongue weight basis", ["measured", "estimated"], "Trailer"),
