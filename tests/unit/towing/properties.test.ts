@@ -11,6 +11,7 @@ import {
   evaluateRig,
   evaluateRigFast,
   FIELD_RANGES,
+  HITCH_TYPES,
   parseRig,
   RECEIVER_SIZES,
   TRAILER_TYPES,
@@ -53,6 +54,8 @@ const vehicle = fc.record({
   wheelbase: o("vehicle.wheelbase"),
   rearAxleToPin: o("vehicle.rearAxleToPin"),
   rearAxleToHitch: o("vehicle.rearAxleToHitch"),
+  rearAxleToBedHitch: o("vehicle.rearAxleToBedHitch"),
+  towRatingBed: o("vehicle.towRatingBed"),
   wdRequiredAbove: o("vehicle.wdRequiredAbove"),
   departureAngle: o("vehicle.departureAngle"),
   tongueShareBand: opt(
@@ -69,10 +72,13 @@ const hitch = opt(
     twRatingWd: o("hitch.twRatingWd"),
     receiverHeight: o("hitch.receiverHeight"),
     pinToFascia: o("hitch.pinToFascia"),
+    bedGtwRating: o("hitch.bedGtwRating"),
+    bedPinRating: o("hitch.bedPinRating"),
   }),
 );
 const trailer = fc.record({
   type: fc.constantFrom(...TRAILER_TYPES),
+  hitchType: opt(fc.constantFrom(...HITCH_TYPES)),
   grossTrailerWeight: o("trailer.grossTrailerWeight"),
   tongueWeight: o("trailer.tongueWeight"),
   tongueWeightBasis: opt(fc.constantFrom("measured" as const, "estimated" as const)),
@@ -140,6 +146,9 @@ const rigArb: fc.Arbitrary<RigInput> = fc
         if (m.scaleReading * k > g) m.scaleReading = g / k;
       }
     }
+    // A bed hitch lies behind the front axle (the schema refuses one at or past it).
+    const v = rest.vehicle as Record<string, number | undefined>;
+    if (v.rearAxleToBedHitch !== undefined && v.wheelbase !== undefined && -v.rearAxleToBedHitch >= v.wheelbase) v.rearAxleToBedHitch = -v.wheelbase / 2;
     const parsed = parseRig({ units: "imperial", ...rest, ...hitched });
     if (!parsed.ok) throw new Error("generator made an invalid rig: " + JSON.stringify(parsed.fieldErrors));
     return parsed.rig;
@@ -329,6 +338,64 @@ describe("properties over the valid input space", () => {
         const est = parseRig({ ...rig, trailer: { ...t, tongueWeight: Math.min(x, y), tongueWeightBasis: "estimated", tongueMeasurement: { scaleReading: Math.max(x, y) } } });
         if (!est.ok) throw new Error("invalid");
         expect(overs(evaluateRig(est.rig))).toEqual(expect.arrayContaining(overs(make(Math.max(x, y), Math.max(x, y))).filter((id) => id !== "tongue-measure")));
+      }),
+      { numRuns: RUNS },
+    );
+  });
+
+  it("a weighed tongue weight that exceeds stays over whatever figure is entered beside it (scale, beam or public scale)", () => {
+    fc.assert(
+      fc.property(
+        rigArb,
+        fc.integer({ min: 0, max: 6000 }),
+        fc.integer({ min: 0, max: 10000 }),
+        fc.constantFrom("scale" as const, "beam" as const, "public-scale" as const),
+        fc.constantFrom("measured" as const, "estimated" as const, undefined),
+        fc.integer({ min: 1, max: 60 }),
+        fc.integer({ min: 0, max: 60 }),
+        (rig, w, entered, method, basis, a, b) => {
+          const t = rig.trailer;
+          fc.pre(!!t);
+          const weighed = Math.min(w, t!.grossTrailerWeight ?? 6000);
+          const typed = Math.min(entered, t!.grossTrailerWeight ?? 10000);
+          const aw = rig.vehicle.axleWeights ?? { front: 3000, rear: 2500 };
+          const weighing =
+            method === "scale"
+              ? { trailer: { tongueMeasurement: { scaleReading: weighed } } }
+              : method === "beam"
+                ? { trailer: { tongueMeasurement: { scaleReading: (weighed * a) / (a + b), blockToJack: a, jackToScale: b } } }
+                : { vehicle: { axleWeights: aw, axleWeightsHitched: { front: aw.front, rear: aw.rear + weighed } } };
+          fc.pre(method !== "public-scale" || aw.rear + weighed <= 30000);
+          const make = (figure: number, figureBasis: "measured" | "estimated" | undefined) => {
+            const trailer = { ...t, tongueMeasurement: undefined, ...weighing.trailer, tongueWeight: figure, tongueWeightBasis: figureBasis };
+            const p = parseRig({ ...rig, vehicle: { ...rig.vehicle, axleWeightsHitched: undefined, ...weighing.vehicle }, trailer });
+            if (!p.ok) throw new Error("invalid: " + JSON.stringify(p.fieldErrors));
+            return evaluateRig(p.rig);
+          };
+          const overs = (r: RigResult) => r.checks.filter((c) => c.status === "over" && c.id !== "tongue-measure").map((c) => c.id);
+          // The weighing alone (entered as the same figure) against the weighing with any other figure beside it.
+          const alone = overs(make(weighed, "measured"));
+          const beside = make(typed, basis);
+          expect(overs(beside)).toEqual(expect.arrayContaining(alone));
+          if (alone.length) expect(beside.verdict.level).toBe("over");
+        },
+      ),
+      { numRuns: RUNS },
+    );
+  });
+
+  it("the front-axle loss check is never over or adjust, a stricter limit never improves it, and missing figures keep it open", () => {
+    fc.assert(
+      fc.property(rigArb, fc.double({ min: 0.01, max: 0.5, noNaN: true }), fc.double({ min: 0.01, max: 0.5, noNaN: true }), (rig, x, y) => {
+        const [strict, loose] = x <= y ? [x, y] : [y, x];
+        const at = (limit: number) => evaluateRig(rig, { frontAxleLossLimit: limit }).checks.find((c) => c.id === "front-axle-loss");
+        const s = at(strict);
+        const l = at(loose);
+        if (!s || !l) return;
+        // Common practice, no published source: a convention may warn, never fail, and never demands a set-up change.
+        expect(["within", "tight", "incomplete"]).toContain(s.status);
+        expect(RANK[s.status]).toBeGreaterThanOrEqual(RANK[l.status]);
+        if (s.missing?.length) expect(s.status).toBe("incomplete");
       }),
       { numRuns: RUNS },
     );
