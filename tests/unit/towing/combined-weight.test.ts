@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { convertRig, evaluateRig, KG_PER_LB } from "@/lib/towing";
+import { convertRig, evaluateRig } from "@/lib/towing";
 import { check, pickupRig } from "./helpers";
 
 const cw = (r: ReturnType<typeof pickupRig>) => check(evaluateRig(r), "combined-weight");
@@ -42,8 +42,8 @@ describe("combined weight", () => {
 
   it("agrees in metric", () => {
     const met = cw(convertRig(pickupRig(), "metric"));
-    // Physics: 9,500 lb = 4,309.13 kg
-    expect(met.actual?.value).toBeCloseTo(9500 * KG_PER_LB, 9);
+    // Physics: 9,500 lb × 0.45359237 kg/lb (the exact definition of the pound) = 4,309.127515 kg
+    expect(met.actual?.value).toBeCloseTo(4309.127515, 6);
     expect(met.status).toBe("within");
   });
 

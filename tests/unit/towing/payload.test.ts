@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { convertRig, evaluateRig, KG_PER_LB } from "@/lib/towing";
+import { convertRig, evaluateRig } from "@/lib/towing";
 import { check, pickupRig } from "./helpers";
 
 const noScale = { axleWeights: undefined };
@@ -72,8 +72,8 @@ describe("payload", () => {
   it("agrees in metric", () => {
     const r = pickupRig({ vehicle: noScale });
     const met = pl(convertRig(r, "metric"));
-    // Source: 49 CFR 567.4(g)(3): 1,900 lb = 861.82 kg
-    expect(met.limit?.value).toBeCloseTo(1900 * KG_PER_LB, 9);
+    // Source: 49 CFR 567.4(g)(3): 1,900 lb × 0.45359237 kg/lb (the exact definition of the pound) = 861.825503 kg
+    expect(met.limit?.value).toBeCloseTo(861.825503, 6);
     expect(met.limit?.unit).toBe("kg");
     expect(met.status).toBe("within");
   });
