@@ -53,7 +53,7 @@ function Figures({ check }: { check: AnyCheckResult }) {
         <Figure term="Share on the tongue" strong>
           {formatQuantity({ value: check.share * 100, unit: "%" })}
         </Figure>
-        <Figure term={check.band.source === "vehicle" ? "The vehicle maker's band" : "Usual band for this trailer"}>
+        <Figure term={check.band.source === "vehicle" ? "The vehicle maker's band" : check.band.source === "hitch-type" ? "Usual pin-weight band" : "Usual band for this trailer"}>
           {bandEdge(check.band.min)} to {bandEdge(check.band.max)}
         </Figure>
       </dl>

@@ -106,7 +106,8 @@ function tongueShareFigure(result: RigResult): ChartFigure | null {
   const check = find<TongueShareResult>(result, "tongue-share", "band");
   if (!check || check.share === undefined) return null;
   const band = `${bandEdge(check.band.min)} to ${bandEdge(check.band.max)}`;
-  const source = check.band.source === "vehicle" ? "the band the vehicle maker gives" : "the usual band for this kind of trailer";
+  const source =
+    check.band.source === "vehicle" ? "the band the vehicle maker gives" : check.band.source === "hitch-type" ? "the usual pin-weight band for a fifth wheel or gooseneck" : "the usual band for this kind of trailer";
   return {
     id: "tongue-share",
     caption: `The marker is the share of the trailer's weight resting on the hitch, ${formatRatio(check.share)}; the shaded stretch is ${source}, ${band}.`,

@@ -30,7 +30,7 @@ export function parseEvaluateRequest(body: unknown): EvaluateRequest {
     if (rawOptions === null || typeof rawOptions !== "object" || Array.isArray(rawOptions)) {
       return { ok: false, fieldErrors: { options: ["Options must be an object."] } };
     }
-    const { tightMarginRatio, accessoryReferenceArm, place } = rawOptions as Record<string, unknown>;
+    const { tightMarginRatio, accessoryReferenceArm, frontAxleLossLimit, place } = rawOptions as Record<string, unknown>;
     if (place !== undefined) {
       const parsed = parsePlace(place);
       if (!parsed.ok) return { ok: false, fieldErrors: parsed.fieldErrors };
@@ -41,6 +41,12 @@ export function parseEvaluateRequest(body: unknown): EvaluateRequest {
         return { ok: false, fieldErrors: { "options.tightMarginRatio": ["Enter a number from 0 to 0.5."] } };
       }
       options.tightMarginRatio = tightMarginRatio;
+    }
+    if (frontAxleLossLimit !== undefined) {
+      if (typeof frontAxleLossLimit !== "number" || !Number.isFinite(frontAxleLossLimit) || frontAxleLossLimit < 0.01 || frontAxleLossLimit > 0.5) {
+        return { ok: false, fieldErrors: { "options.frontAxleLossLimit": ["Enter a number from 0.01 to 0.5."] } };
+      }
+      options.frontAxleLossLimit = frontAxleLossLimit;
     }
     if (accessoryReferenceArm !== undefined) {
       if (typeof accessoryReferenceArm !== "number" || !Number.isFinite(accessoryReferenceArm) || accessoryReferenceArm <= 0 || accessoryReferenceArm > 2000) {
