@@ -15,6 +15,7 @@ export const LESSON_FAMILIES = [
   { id: "payload", label: "Payload" },
   { id: "combined-weight", label: "Combined weight" },
   { id: "axle-loads", label: "Axle loads" },
+  { id: "front-axle-loss", label: "Front-axle load loss" },
   { id: "weight-distribution", label: "Weight-distribution restoration" },
   { id: "ball-mount", label: "Ball-mount rise or drop" },
   { id: "accessory-fit", label: "Accessory load and clearance" },
@@ -139,6 +140,24 @@ export const LIBRARY: readonly LibraryExample[] = [
       name: "Marit's pickup with a travel trailer (invented)",
       // 41 in to the pin hole + a 9 in ball mount = the ball 50 in behind the rear axle
       vehicle: { gawrFront: 3700, gawrRear: 4000, axleWeights: { front: 3100, rear: 2600 }, wheelbase: 145, rearAxleToPin: 41 },
+      trailer: { type: "travel", grossTrailerWeight: 6400, tongueWeight: 800, tongueWeightBasis: "measured" },
+      ballMount: { length: 9 },
+    },
+  },
+  {
+    slug: "light-on-the-steering",
+    title: "How much grip the front wheels lose",
+    story:
+      "Osric Wendle's short pickup carries 2,700 lb on its front axle, weighed unhitched and loaded. The ball sits 50 in behind the rear axle, the wheelbase is 145 in, and the trailer puts 800 lb on the ball. His shop calls a front axle that loses more than a tenth of its load worth a second look.",
+    question: "How much load does the front axle lose, and what share of it is that?",
+    checkId: "front-axle-loss",
+    rule: "A tongue load behind the rear axle lifts TW × OH ÷ WB off the front axle (statics, moments about the rear axle); weight distribution gives part of it back. The limit the shop sets (10 % unless it chooses another) is common practice with no published source: beyond it the check reads tight, never over. The vehicle maker's own figure wins.",
+    keyStep: "front-loss",
+    rig: {
+      units: "imperial",
+      name: "Osric's pickup with a travel trailer (invented)",
+      // 41 in to the pin hole + a 9 in ball mount = the ball 50 in behind the rear axle
+      vehicle: { axleWeights: { front: 2700, rear: 2600 }, wheelbase: 145, rearAxleToPin: 41 },
       trailer: { type: "travel", grossTrailerWeight: 6400, tongueWeight: 800, tongueWeightBasis: "measured" },
       ballMount: { length: 9 },
     },

@@ -71,6 +71,13 @@ describe("the built-in library", () => {
     expect(keyFigure("tongue-load-on-the-axles", "front-change").value).toBeCloseTo(-275.86, 2);
   });
 
+  it("front-axle loss: an 800 lb tongue 50 in behind the axle lifts 275.86 lb off a 2,700 lb front axle", () => {
+    // Physics: statics (REFERENCES: WB 145 in, OH 50 in, TW 800 lb → front −275.86 lb): 800 × 50 ÷ 145 = 275.86 lb
+    expect(keyFigure("light-on-the-steering").value).toBeCloseTo(275.86, 2);
+    // Arithmetic: 275.86 ÷ 2,700 = 10.2 %, beyond the default 10 % (common practice, no published source)
+    expect(keyFigure("light-on-the-steering", "front-loss-share").value).toBeCloseTo(10.217, 3);
+  });
+
   it("weight distribution: H1 1030 mm, H2 1058 mm, 50 % → H3 1044 mm; 1046 mm gives back 42.9 %", () => {
     // Source: Ram owner's manuals (2015, 2018, 2023), citing SAE J2807: H1 1030 mm, H2 1058 mm, 50 % → H3 1044 mm
     const { value, unit } = keyFigure("give-the-front-axle-back");
