@@ -28,9 +28,11 @@ function side(result: FastRigResult, used: boolean, asEntered: boolean): WdSide 
   return { used, asEntered, level: result.level, governing: result.governing, over: result.over, adjust: result.adjust, incomplete: result.incomplete };
 }
 
-/** Both readings of a trailer rig, or null when nothing is towed (weight distribution is a trailer's set-up). */
+/** Both readings of a trailer rig on a receiver, or null when nothing is towed or the trailer rides on a bed hitch. */
 export function compareWeightDistribution(rig: RigInput, options?: EvaluateOptions): WdComparison | null {
   if (!rig.trailer) return null;
+  // A fifth wheel or gooseneck sits over the axle: weight distribution is not part of such a rig.
+  if (rig.trailer.hitchType && rig.trailer.hitchType !== "receiver") return null;
   const entered = !!rig.weightDistribution?.used;
   const off: RigInput = { ...rig, weightDistribution: { ...rig.weightDistribution, used: false } };
   const on: RigInput = { ...rig, weightDistribution: { ...rig.weightDistribution, used: true } };

@@ -47,3 +47,10 @@ describe("the rig read without and with weight distribution", () => {
     expect(compareWeightDistribution(rack)).toBeNull();
   });
 });
+
+describe("a bed hitch", () => {
+  it("has no weight-distribution comparison: the pin sits over the axle", () => {
+    const fifth = pickupRig({ trailer: { hitchType: "fifth-wheel" }, vehicle: { rearAxleToBedHitch: -2 } });
+    expect(compareWeightDistribution(fifth)).toBeNull();
+  });
+});
