@@ -231,6 +231,25 @@ export function needTongueWeight(d: Derived): MissingField[] {
   return d.twNeed.map(need);
 }
 
+/**
+ * What the statics of the axles must still be given: the load on the hitch (the tongue weight, or a rack and
+ * its load), the wheelbase and the overhang. The axle loads and the front-axle loss ask for the same figures.
+ */
+export function needHitchLever(d: Derived): MissingField[] {
+  const rig = d.rig;
+  const missing: MissingField[] = [];
+  if (d.hitchLoad === undefined) {
+    if (d.hasTrailer) missing.push(...needTongueWeight(d));
+    else {
+      if (rig.accessory!.weight === undefined) missing.push(need("accessory.weight"));
+      if (rig.accessory!.loadWeight === undefined) missing.push(need("accessory.loadWeight"));
+    }
+  }
+  if (rig.vehicle.wheelbase === undefined) missing.push(need("vehicle.wheelbase"));
+  for (const f of d.overhangNeed) missing.push(need(f));
+  return missing;
+}
+
 /** One sentence every check that uses the tongue weight carries: which figure it judges on, and why. */
 export function tongueWeightNote(d: Derived, c: Ctx): string | undefined {
   const t = d.rig.trailer;

@@ -4,7 +4,7 @@
  * Each axle is compared with its GAWR; the front axle with the larger of its unhitched and hitched loads.
  */
 import { fL, fP, fW, govW, iL, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
-import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
+import { needHitchLever, tongueWeightNote, type Derived } from "../derive";
 import { TAKE_WEIGHT_OUT, wdRatingsState } from "../advice";
 import { need } from "../missing";
 import type { AxleLoadsResult, CheckStatus, MissingField, Step } from "../types";
@@ -48,17 +48,8 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
   if (!d.hasTrailer && !d.hasAccessory) return null;
   const { rig } = d;
   const v = rig.vehicle;
-  const missing: MissingField[] = [];
+  const missing: MissingField[] = needHitchLever(d);
   const p = d.hitchLoad;
-  if (p === undefined) {
-    if (d.hasTrailer) missing.push(...needTongueWeight(d));
-    else {
-      if (rig.accessory!.weight === undefined) missing.push(need("accessory.weight"));
-      if (rig.accessory!.loadWeight === undefined) missing.push(need("accessory.loadWeight"));
-    }
-  }
-  if (v.wheelbase === undefined) missing.push(need("vehicle.wheelbase"));
-  for (const f of d.overhangNeed) missing.push(need(f));
   if (!v.axleWeights) missing.push(need("vehicle.axleWeights"));
   if (v.gawrFront === undefined) missing.push(need("vehicle.gawrFront"));
   if (v.gawrRear === undefined) missing.push(need("vehicle.gawrRear"));

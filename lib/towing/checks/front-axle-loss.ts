@@ -11,7 +11,7 @@
  * never adjust (a convention does not make a set-up change compulsory). A vehicle maker's own figure wins.
  */
 import { fP, fW, govW, iN, iW, iL, marginW, NO_STEPS, NO_TEXT, qW, rN, rW, statusOf, withMissing, type Ctx } from "../context";
-import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
+import { needHitchLever, tongueWeightNote, type Derived } from "../derive";
 import { TAKE_WEIGHT_OUT, wdAdvice } from "../advice";
 import { need } from "../missing";
 import type { CheckStatus, FrontAxleLossResult, MissingField, Step } from "../types";
@@ -59,15 +59,7 @@ export function checkFrontAxleLoss(d: Derived, c: Ctx): FrontAxleLossResult | nu
         result: rW(c, "L_F", lost),
       });
   } else {
-    if (p === undefined) {
-      if (d.hasTrailer) missing.push(...needTongueWeight(d));
-      else {
-        if (rig.accessory!.weight === undefined) missing.push(need("accessory.weight"));
-        if (rig.accessory!.loadWeight === undefined) missing.push(need("accessory.loadWeight"));
-      }
-    }
-    if (v.wheelbase === undefined) missing.push(need("vehicle.wheelbase"));
-    for (const f of d.overhangNeed) missing.push(need(f));
+    missing.push(...needHitchLever(d));
     if (p !== undefined && v.wheelbase !== undefined && d.overhang !== undefined) {
       lost = -axleLoadChange(p, v.wheelbase, d.overhang).front;
       result.basis = "statics";
