@@ -1,18 +1,14 @@
 /**
- * The one conversion module of the core. Factors come from mathjs units, read once when the module loads,
- * so the hot path multiplies plain numbers and never calls mathjs.
+ * The one conversion module of the core. The two factors are exact by definition and written here as
+ * literals, so the core ships no unit library to the browser (a unit test holds them equal to mathjs's units).
  *
  * Canonical system inside the core: imperial (lb, in). Input is converted to it at the boundary and every
  * displayed value is converted back to the rig's own system here.
  */
-import { create, unitDependencies } from "mathjs";
-
-const math = create(unitDependencies as NonNullable<typeof unitDependencies>);
-
-/** Kilograms in one pound (exact by definition; read from mathjs). */
-export const KG_PER_LB: number = math.unit(1, "lb").toNumber("kg");
-/** Millimetres in one inch (exact by definition; read from mathjs). */
-export const MM_PER_IN: number = math.unit(1, "inch").toNumber("mm");
+/** Kilograms in one pound. Exact by definition (the international yard and pound agreement of 1959). */
+export const KG_PER_LB = 0.45359237;
+/** Millimetres in one inch. Exact by definition (the same agreement). */
+export const MM_PER_IN = 25.4;
 
 export type UnitSystem = "imperial" | "metric";
 export type Dimension = "mass" | "length";

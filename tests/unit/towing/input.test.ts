@@ -1,15 +1,18 @@
 import { describe, expect, it } from "vitest";
-import { parse } from "mathjs";
+import { parse, unit } from "mathjs";
 import { convertRig, evaluateRig, KG_PER_LB, MM_PER_IN, parseRig, rigInputSchema } from "@/lib/towing";
 import { parseRig as parseFromValidation } from "@/lib/validation/rig";
 import { pickupRig } from "./helpers";
 
 describe("rig input", () => {
-  it("reads the conversion factors from mathjs", () => {
+  it("writes the conversion factors as the exact definitions, equal to mathjs's units", () => {
     // From memory: the international pound is exactly 0.45359237 kg (1959 agreement)
     expect(KG_PER_LB).toBe(0.45359237);
     // From memory: the inch is exactly 25.4 mm (1959 agreement)
     expect(MM_PER_IN).toBe(25.4);
+    // The core keeps no unit library in the browser; mathjs's own unit table must agree with its literals.
+    expect(unit(1, "lb").toNumber("kg")).toBeCloseTo(KG_PER_LB, 12);
+    expect(unit(1, "inch").toNumber("mm")).toBeCloseTo(MM_PER_IN, 12);
   });
 
   it("gives field-level messages with dotted paths", () => {
