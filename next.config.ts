@@ -1,8 +1,16 @@
 import type { NextConfig } from "next";
 
+/**
+ * A test build (TOWMARGIN_TEST_ROUTES=1, as `npm test` and the browser tests make it) also routes the
+ * `page.fixture.tsx` files, pages that only the tests visit, and goes to its own folder, so a product build
+ * never holds them.
+ */
+const testRoutes = process.env.TOWMARGIN_TEST_ROUTES === "1";
+
 const nextConfig: NextConfig = {
   // Separate build folders let several builds of one tree live side by side (NEXT_DIST_DIR=.next-other).
-  distDir: process.env.NEXT_DIST_DIR || ".next",
+  distDir: process.env.NEXT_DIST_DIR || (testRoutes ? ".next-test" : ".next"),
+  pageExtensions: testRoutes ? ["tsx", "ts", "fixture.tsx"] : ["tsx", "ts"],
   experimental: { authInterrupts: true },
   poweredByHeader: false,
   reactStrictMode: true,

@@ -1,6 +1,9 @@
 import { defineConfig } from "vitest/config";
 import { fileURLToPath } from "node:url";
 
+// The browser tests run a test build: the product plus the pages only tests visit (next.config.ts), in .next-test.
+process.env.TOWMARGIN_TEST_ROUTES ??= "1";
+
 // Browser tests: one production server for the whole run, files one after another (2-core machine).
 export default defineConfig({
   resolve: { alias: { "@": fileURLToPath(new URL("./", import.meta.url)) } },

@@ -43,7 +43,7 @@ import { GlossaryDisclosure } from "@/components/glossary/glossary-disclosure";
 import { GlossaryList } from "@/components/glossary/glossary-list";
 import { SYMBOLS, TERMS } from "@/lib/glossary";
 import { SAMPLE_RIGS } from "./sample-rigs";
-import { LiveVerdict } from "./live-verdict";
+import { LiveVerdict } from "./live-verdict-lazy";
 import { parseCandidate } from "./parse-candidate";
 import { SaveCheck, type SaveCheckHandler, type SaveCheckInput } from "./save-check";
 import { SaveVehicleProfile, type SaveVehicleProfileHandler } from "./save-vehicle-profile";

@@ -5,6 +5,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { TestProject } from "vitest/node";
 import { CHROMIUM_PATH, chromiumMissingMessage } from "./chromium";
+import { DIST_DIR } from "../../load/support/app-server";
 
 declare module "vitest" {
   export interface ProvidedContext {
@@ -48,7 +49,7 @@ export default async function setup(project: TestProject) {
   if (!existsSync(CHROMIUM_PATH)) throw new Error(chromiumMissingMessage());
 
   const root = process.cwd();
-  if (!existsSync(join(root, process.env.NEXT_DIST_DIR || ".next", "BUILD_ID"))) {
+  if (!existsSync(join(root, DIST_DIR, "BUILD_ID"))) {
     const build = spawnSync("npx", ["next", "build"], { stdio: "inherit", env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1" } });
     if (build.status !== 0) throw new Error("next build failed.");
   }

@@ -11,7 +11,7 @@ import { sessionCookieSettings } from "../../../lib/server/session-cookie";
  * A production server of this tree on a free loopback port, over its own seeded SQLite file: the bench and
  * the crash test start, kill and restart it as they need.
  */
-export const DIST_DIR = process.env.NEXT_DIST_DIR || ".next";
+export const DIST_DIR = process.env.NEXT_DIST_DIR || (process.env.TOWMARGIN_TEST_ROUTES === "1" ? ".next-test" : ".next");
 
 export function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
