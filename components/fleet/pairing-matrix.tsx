@@ -26,6 +26,7 @@ const SETUP_WORDS: Partial<Record<string, string>> = {
   "accessory-fit": "accessory fit",
   "tongue-share": "trailer loading",
   "weakest-link": "ball size",
+  "hardware-fit": "hitch parts",
 };
 
 function cellHref(vehicleId: string, column: MatrixColumn): string {

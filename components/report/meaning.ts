@@ -29,6 +29,7 @@ const ADJUST_WORDS: Partial<Record<CheckId, string>> = {
   "ball-mount": "The trailer would not ride level: a ball mount with another rise or drop is needed before you tow.",
   "weight-distribution": "The weight-distribution hitch needs fitting or re-setting, as its maker's instructions say, before you tow.",
   "accessory-fit": "The rack or carrier needs a different set-up before you drive: see what to do.",
+  "hardware-fit": "A part of the hitch is not the right size for the others (the ball, its shank, the ball mount's hole or the hitch pin): it needs changing before you tow.",
 };
 
 /** One plain line on what this check's finding means for the customer. */

@@ -20,6 +20,8 @@ export function isVehicleRating(id: string): boolean {
 
 /** Advice for a rating link that is exceeded. */
 export function overLinkAdvice(c: Ctx, id: string, label: string, limits: "gross-trailer-weight" | "tongue-weight", needed: number): string {
+  if (id === "vehicle.towRatingUnbraked")
+    return `${label} is exceeded: no part can raise the vehicle's own rating. Tow a lighter trailer, a trailer with brakes (within the vehicle's braked rating), or use a vehicle rated for at least ${fW(c, needed)} unbraked.`;
   if (isVehicleRating(id))
     return limits === "tongue-weight"
       ? `${label} is exceeded: no part can raise the vehicle's own rating. Take weight out of the trailer, keeping the tongue share inside its band, or use a vehicle rated for it.`
@@ -43,8 +45,8 @@ export function wdRatingsState(d: Derived): WdRatingsState {
   const v = rig.vehicle;
   const h = rig.hitch;
   const t = rig.trailer;
-  const onGtw = [v.towRatingWd, h?.gtwRatingWd, t?.ballRating, t?.couplerRating, t?.safetyChainRating];
-  const onTw = [v.tongueWeightLimitWd, h?.twRatingWd, rig.weightDistribution?.tongueRating, rig.extender?.twRating];
+  const onGtw = [v.towRatingWd, h?.gtwRatingWd, t?.ballRating, t?.couplerRating, t?.safetyChainRating, rig.receiverAdapter?.gtwRating, rig.ballSleeve?.gtwRating, t?.brakes === "none" ? v.towRatingUnbraked : undefined];
+  const onTw = [v.tongueWeightLimitWd, h?.twRatingWd, rig.weightDistribution?.tongueRating, rig.extender?.twRating, rig.receiverAdapter?.twRating, rig.ballSleeve?.twRating];
   for (const r of onGtw) if (r !== undefined && gtw !== undefined && !lessOrEqual(gtw, r)) return "exceeded";
   for (const r of onTw) if (r !== undefined && tw !== undefined && !lessOrEqual(tw, r)) return "exceeded";
   if (v.towRatingWd === undefined || v.tongueWeightLimitWd === undefined || gtw === undefined || tw === undefined) return "unknown";

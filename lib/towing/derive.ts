@@ -59,7 +59,21 @@ export interface Derived {
   /** Fields the overhang still needs. */
   overhangNeed: string[];
   /** Per-evaluation memo for figures several checks share (rating set, restoration). */
-  cache: { ratingSet?: unknown; wdState?: unknown };
+  cache: { ratingSet?: unknown; wdState?: unknown; axles?: DrivenAxles | null };
+}
+
+/**
+ * Each vehicle axle's load as the axle-loads check compares it with the GAWRs (canonical lb): the front the larger
+ * of unhitched and hitched, the rear as driven (with weight distribution unmeasured, the heaviest, and the lightest
+ * it could be beside it). The tyres check reads the same figures.
+ */
+export interface DrivenAxles {
+  front: number;
+  rear: number;
+  rearLightest?: number;
+  estimated: boolean;
+  /** "weighed": the hitched figures were weighed; "statics": worked from the unhitched weighing. */
+  basis: "weighed" | "statics";
 }
 
 export function derive(rig: RigInput): Derived {

@@ -13,6 +13,9 @@ import { checkBallMount } from "./checks/ball-mount";
 import { checkCombinedWeight } from "./checks/combined-weight";
 import { checkEnvelope } from "./checks/envelope";
 import { checkFrontAxleLoss } from "./checks/front-axle-loss";
+import { checkHardwareFit } from "./checks/hardware-fit";
+import { checkTrailerLabels } from "./checks/trailer-labels";
+import { checkTyres } from "./checks/tyres";
 import { checkPayload } from "./checks/payload";
 import { checkTongueMeasure } from "./checks/tongue-measure";
 import { checkTongueShare } from "./checks/tongue-share";
@@ -50,8 +53,11 @@ const CHECKS: ReadonlyArray<[CheckId, CheckFn]> = [
   ["combined-weight", checkCombinedWeight],
   ["axle-loads", checkAxleLoads],
   ["front-axle-loss", checkFrontAxleLoss],
+  ["trailer-labels", checkTrailerLabels],
+  ["tyres", checkTyres],
   ["weight-distribution", checkWeightDistribution],
   ["ball-mount", checkBallMount],
+  ["hardware-fit", checkHardwareFit],
   ["accessory-fit", checkAccessoryFit],
   ["envelope", checkEnvelope],
 ];

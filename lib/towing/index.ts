@@ -13,6 +13,10 @@ export {
   RECEIVER_SIZES,
   BALL_SIZES,
   BRAKE_TYPES,
+  SHANK_SIZES,
+  PIN_SIZES,
+  type ShankSize,
+  type PinSize,
   HITCH_TYPES,
   type HitchType,
   LICENCE_CATEGORIES,
@@ -30,7 +34,7 @@ export { compareWeightDistribution, type WdComparison, type WdSide } from "./com
 export { parseEvaluateRequest, parsePlace, type EvaluateRequest, type EvaluateDetail } from "./request";
 export { tongueWeightByScale, tongueWeightByBeam, tongueWeightByPublicScale, DIRECT_SCALE_LIMIT_LB, type MeasureResult, type AxlePair } from "./measure";
 export { GENERAL_CAUTIONS } from "./checks/verdict";
-export { TONGUE_BANDS, BED_HITCH_BAND, CLASS_MAX_GTW, COMMON_DROPS_IN } from "./reference";
+export { TONGUE_BANDS, BED_HITCH_BAND, CLASS_MAX_GTW, COMMON_DROPS_IN, MIN_BALL_BY_CLASS, RECEIVERS_BY_CLASS, PIN_FOR_RECEIVER } from "./reference";
 export { KG_PER_LB, MM_PER_IN, type UnitSystem, type UnitString } from "./units";
 export * from "./types";
 export {

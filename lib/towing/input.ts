@@ -28,6 +28,12 @@ export const RECEIVER_SIZES = ["1-1/4", "2", "2-1/2", "3"] as const;
 /** Nominal hitch-ball diameters, in inches as stamped. */
 export const BALL_SIZES = ["1-7/8", "2", "2-5/16", "3"] as const;
 export const BRAKE_TYPES = ["none", "surge", "electric", "other"] as const;
+/** Nominal ball shank diameters (and the ball mount holes they go through), in inches as the trade names them. */
+export const SHANK_SIZES = ["3/4", "1", "1-1/4"] as const;
+export type ShankSize = (typeof SHANK_SIZES)[number];
+/** Nominal hitch pin diameters, in inches as the trade names them. */
+export const PIN_SIZES = ["1/2", "5/8"] as const;
+export type PinSize = (typeof PIN_SIZES)[number];
 /**
  * How the trailer hitches: a ball coupler on a ball mount in the receiver behind the bumper, or a hitch in the
  * bed over or ahead of the rear axle (a fifth wheel takes a kingpin, a gooseneck a ball). Not given: receiver.
@@ -132,6 +138,13 @@ function rigShape<U extends UnitSystem>(units: U) {
       rearAxleToBedHitch: l("vehicle.rearAxleToBedHitch", "Rear axle to the bed hitch (negative: ahead of the axle)", -60, 60),
       /** The maker's tow rating for a fifth wheel or gooseneck, where it gives one apart from the conventional figure. */
       towRatingBed: m("vehicle.towRatingBed", "Tow rating for a fifth wheel or gooseneck", 0, 40000),
+      /** The maker's tow rating for a trailer without brakes: a link whenever `trailer.brakes` is "none". */
+      towRatingUnbraked: m("vehicle.towRatingUnbraked", "Tow rating for a trailer without brakes", 0, 40000),
+      /** Each front tyre's maximum load (the figure on its sidewall); the front axle has two. */
+      tyreLoadFront: m("vehicle.tyreLoadFront", "Front tyre load capacity (each tyre)", 200, 10000),
+      /** Each rear tyre's maximum load; the rear axle has two, or four with `dualRearWheels`. */
+      tyreLoadRear: m("vehicle.tyreLoadRear", "Rear tyre load capacity (each tyre)", 200, 10000),
+      dualRearWheels: z.boolean({ error: "Dual rear wheels: yes or no." }).optional(),
       wdRequiredAbove: m("vehicle.wdRequiredAbove", "Weight distribution required above", 0, 40000),
       departureAngle: field(units, "vehicle.departureAngle", "Departure angle", "angle", 1, 60),
       tongueShareBand: z
@@ -151,6 +164,7 @@ function rigShape<U extends UnitSystem>(units: U) {
           .max(5, { error: "Hitch class: enter 1 to 5." })
           .optional(),
         receiverSize: z.enum(RECEIVER_SIZES, { error: "Receiver size: choose 1-1/4, 2, 2-1/2 or 3 in." }).optional(),
+        pinDiameter: z.enum(PIN_SIZES, { error: "Hitch pin: choose 1/2 or 5/8 in." }).optional(),
         gtwRating: m("hitch.gtwRating", "Hitch gross trailer weight rating", 0, 40000),
         twRating: m("hitch.twRating", "Hitch tongue weight rating", 0, 6000),
         gtwRatingWd: m("hitch.gtwRatingWd", "Hitch gross trailer weight rating with weight distribution", 0, 40000),
@@ -182,9 +196,20 @@ function rigShape<U extends UnitSystem>(units: U) {
         couplerBallSize: z.enum(BALL_SIZES, { error: "Coupler ball size: choose one from the list." }).optional(),
         ballSize: z.enum(BALL_SIZES, { error: "Ball size: choose one from the list." }).optional(),
         ballRating: m("trailer.ballRating", "Ball rating", 0, 40000),
+        ballShankSize: z.enum(SHANK_SIZES, { error: "Ball shank: choose 3/4, 1 or 1-1/4 in." }).optional(),
         brakes: z.enum(BRAKE_TYPES, { error: "Brakes: choose one from the list." }).optional(),
         safetyChainRating: m("trailer.safetyChainRating", "Safety chain rating (each chain)", 0, 60000),
         mam: m("trailer.mam", "Trailer's plated maximum mass", 50, 30000),
+        /** Each axle's own rating (GAWR), from the trailer's label. */
+        axleRating: m("trailer.axleRating", "Trailer axle rating (each axle)", 100, 20000),
+        axleCount: z
+          .number({ error: "Trailer axles: enter 1 to 4." })
+          .int({ error: "Trailer axles: enter a whole number from 1 to 4." })
+          .min(1, { error: "Trailer axles: enter 1 to 4." })
+          .max(4, { error: "Trailer axles: enter 1 to 4." })
+          .optional(),
+        /** Each trailer tyre's maximum load; two tyres per axle. */
+        tyreLoad: m("trailer.tyreLoad", "Trailer tyre load capacity (each tyre)", 200, 10000),
         brakesAllWheels: z.boolean({ error: "Brakes on every wheel: yes or no." }).optional(),
         breakaway: z.boolean({ error: "Breakaway device: yes or no." }).optional(),
         couplingDValue: field(units, "trailer.couplingDValue", "Coupling head D value", "force", 1, 200),
@@ -197,6 +222,21 @@ function rigShape<U extends UnitSystem>(units: U) {
         drop: l("ballMount.drop", "Ball mount drop (negative for a rise)", -12, 16),
         length: l("ballMount.length", "Ball mount length, pin to ball", 0, 30),
         squatAllowance: l("ballMount.squatAllowance", "Expected rear squat when hitched", 0, 8),
+        holeSize: z.enum(SHANK_SIZES, { error: "Ball mount hole: choose 3/4, 1 or 1-1/4 in." }).optional(),
+      })
+      .optional(),
+    /** A receiver-size adapter (a reducer or an enlarger) between the receiver and the ball mount: a link with its own label. */
+    receiverAdapter: z
+      .object({
+        gtwRating: m("receiverAdapter.gtwRating", "Receiver adapter gross trailer weight rating", 0, 40000),
+        twRating: m("receiverAdapter.twRating", "Receiver adapter tongue weight rating", 0, 6000),
+      })
+      .optional(),
+    /** A reducer sleeve (bushing) in the ball mount's hole, so a thinner ball shank fits: a link with its own label. */
+    ballSleeve: z
+      .object({
+        gtwRating: m("ballSleeve.gtwRating", "Ball reducer sleeve gross trailer weight rating", 0, 40000),
+        twRating: m("ballSleeve.twRating", "Ball reducer sleeve tongue weight rating", 0, 6000),
       })
       .optional(),
     extender: z
@@ -295,6 +335,8 @@ const SECTION_WORDS: Record<string, string> = {
   hitch: "The hitch section",
   trailer: "The trailer section",
   ballMount: "The ball mount section",
+  receiverAdapter: "The receiver adapter section",
+  ballSleeve: "The ball reducer sleeve section",
   extender: "The extender section",
   weightDistribution: "The weight-distribution section",
   load: "The load section",

@@ -35,3 +35,46 @@ export const CLASS_MAX_GTW: Record<number, number> = {
 
 /** Ball mounts come in whole-inch rises and drops up to about 12 in. Common practice, no published source. */
 export const COMMON_DROPS_IN = [0, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12];
+
+/** Nominal sizes named as the trade stamps them, in inches (for comparing one size with another). */
+export const SIZE_IN: Record<string, number> = {
+  "1/2": 0.5,
+  "5/8": 0.625,
+  "3/4": 0.75,
+  "1": 1,
+  "1-1/4": 1.25,
+  "1-7/8": 1.875,
+  "2": 2,
+  "2-1/2": 2.5,
+  "2-5/16": 2.3125,
+  "3": 3,
+};
+
+/**
+ * Smallest ball diameter (a BALL_SIZES name) by trailer class, the class read from the trailer's gross weight
+ * (CLASS_MAX_GTW). Class 4 sets no diameter: its ball and bolt must match the strength its coupler needs.
+ */
+export const MIN_BALL_BY_CLASS: Record<number, string | undefined> = {
+  // Source: 15 CRR-NY 57.5 Table 1 (minimum ball diameter, inches, where a ball-type hitch is used), every row
+  1: "1-7/8",
+  2: "2",
+  3: "2",
+  4: undefined,
+};
+
+/** Receiver openings a hitch class usually has. Common practice, no published source (SAE J684 sets no opening). */
+export const RECEIVERS_BY_CLASS: Record<number, readonly string[]> = {
+  1: ["1-1/4"],
+  2: ["1-1/4"],
+  3: ["2"],
+  4: ["2"],
+  5: ["2", "2-1/2", "3"],
+};
+
+/** The hitch pin that goes through each receiver opening. Common practice, no published source. */
+export const PIN_FOR_RECEIVER: Record<string, string> = {
+  "1-1/4": "1/2",
+  "2": "5/8",
+  "2-1/2": "5/8",
+  "3": "5/8",
+};

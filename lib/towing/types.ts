@@ -29,8 +29,11 @@ export const CHECK_IDS = [
   "combined-weight",
   "axle-loads",
   "front-axle-loss",
+  "trailer-labels",
+  "tyres",
   "weight-distribution",
   "ball-mount",
+  "hardware-fit",
   "accessory-fit",
   "envelope",
   "local-rules",
@@ -163,6 +166,26 @@ export interface FrontAxleLossResult extends CheckResult {
   lossAtWdTarget?: Quantity;
 }
 
+export interface TrailerLabelsResult extends CheckResult {
+  id: "trailer-labels";
+  /** Load on the trailer's axles: the gross trailer weight less the tongue (pin) weight. Statics. */
+  axleLoad?: Quantity;
+  /** The trailer's axle ratings together: each axle's rating × axles. */
+  axleCapacity?: Quantity;
+}
+
+export interface TyresResult extends CheckResult {
+  id: "tyres";
+  /** The vehicle's axle loads the tyres are compared with (the axle-loads check's figures). */
+  vehicleAxles?: AxleLoads;
+}
+
+export interface HardwareFitResult extends CheckResult {
+  id: "hardware-fit";
+  /** Each fit: `ball-size`, `receiver-class`, `shank-hole`, `pin`. `waitingFor`: what a part still needs, in words. */
+  parts: Array<{ id: string; label: string; status: CheckStatus; actual?: Quantity; limit?: Quantity; waitingFor?: string }>;
+}
+
 export interface WeightDistributionResult extends CheckResult {
   id: "weight-distribution";
   restoration?: number;
@@ -250,6 +273,9 @@ export type AnyCheckResult =
   | TongueMeasureResult
   | AxleLoadsResult
   | FrontAxleLossResult
+  | TrailerLabelsResult
+  | TyresResult
+  | HardwareFitResult
   | WeightDistributionResult
   | BallMountResult
   | AccessoryFitResult

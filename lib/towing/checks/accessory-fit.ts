@@ -50,8 +50,11 @@ export function checkAccessoryFit(d: Derived, c: Ctx): AccessoryFitResult | null
   // The extender's label already allows for its own length: it is compared with the plain load, never derated again.
   if (rig.extender?.twRating !== undefined) limits.push(["extender.twRating", "Extender tongue rating", rig.extender.twRating]);
   else if (rig.extender) missing.push(need("extender.twRating"));
+  // A receiver adapter carries the rack as well: its own label is a link, required when one is fitted.
+  if (rig.receiverAdapter?.twRating !== undefined) limits.push(["receiverAdapter.twRating", "Receiver adapter tongue rating", rig.receiverAdapter.twRating]);
+  else if (rig.receiverAdapter) missing.push(need("receiverAdapter.twRating"));
   let lowVh: [string, string, number] | undefined;
-  for (const l of limits) if (l[0] !== "extender.twRating" && (!lowVh || lessThan(l[2], lowVh[2]))) lowVh = l;
+  for (const l of limits) if (l[0] !== "extender.twRating" && l[0] !== "receiverAdapter.twRating" && (!lowVh || lessThan(l[2], lowVh[2]))) lowVh = l;
   if (a.weight === undefined) missing.push(need("accessory.weight"));
   if (a.loadWeight === undefined) missing.push(need("accessory.loadWeight"));
   if (a.loadCenterFromPin === undefined) missing.push(need("accessory.loadCenterFromPin"));

@@ -4,7 +4,7 @@
  * Each axle is compared with its GAWR; the front axle with the larger of its unhitched and hitched loads.
  */
 import { fL, fP, fW, govW, iL, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
-import { needHitchLever, tongueWeightNote, type Derived } from "../derive";
+import { needHitchLever, tongueWeightNote, type Derived, type DrivenAxles } from "../derive";
 import { TAKE_WEIGHT_OUT, wdRatingsState } from "../advice";
 import { need } from "../missing";
 import type { AxleLoadsResult, CheckStatus, MissingField, Step } from "../types";
@@ -43,6 +43,15 @@ const CAUTIONS = [
   "Weight on the hitch lightens the front axle: the front tyres steer and brake with less grip.",
   "Cargo placed behind the rear axle adds to the rear axle even more than its own weight.",
 ];
+
+/** The axle loads the axle-loads check compares (computed once per evaluation; null when they cannot be known). */
+export function drivenAxles(d: Derived, c: Ctx): DrivenAxles | null {
+  if (d.cache.axles === undefined) {
+    d.cache.axles = null;
+    checkAxleLoads(d, { ...c, detail: false });
+  }
+  return d.cache.axles ?? null;
+}
 
 export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
   if (!d.hasTrailer && !d.hasAccessory) return null;
@@ -157,6 +166,7 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
       }
       // The vehicle also drives unhitched, so the front axle answers for the larger of the two.
       const frontWorst = Math.max(aw.front, front, frontDriven);
+      d.cache.axles = { front: frontWorst, rear: rearDriven, rearLightest, estimated: !!result.estimated, basis: awh ? "weighed" : "statics" };
       let bestRatio = Infinity;
       const axles: Array<[string, string, number, number | undefined]> = [
         ["vehicle.gawrRear", "Rear GAWR", rearDriven, v.gawrRear],

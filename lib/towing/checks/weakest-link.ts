@@ -64,6 +64,7 @@ function buildBedRatingSet(d: Derived): RatingSet {
   else if (v.towRating !== undefined)
     gtw.push({ id: "vehicle.towRating", label: "Vehicle tow rating", symbol: "R_veh", rating: v.towRating, note: "The vehicle's conventional tow rating is used: the owner's manual may give another figure for a fifth wheel or gooseneck; enter it." });
   else missing.push(need("vehicle.towRatingBed"));
+  unbrakedLink(d, gtw, missing);
   if (h?.bedGtwRating !== undefined) gtw.push({ id: "hitch.bedGtwRating", label: "Bed hitch rating", symbol: "R_bed", rating: h.bedGtwRating });
   else missing.push(need("hitch.bedGtwRating"));
   if (h?.bedPinRating !== undefined) tw.push({ id: "hitch.bedPinRating", label: "Bed hitch pin weight rating", symbol: "T_bed", rating: h.bedPinRating });
@@ -102,6 +103,7 @@ function buildRatingSet(d: Derived): RatingSet {
   else if (v.towRating !== undefined)
     gtw.push({ id: "vehicle.towRating", label: "Vehicle tow rating", symbol: "R_veh", rating: v.towRating, note: wdUsed ? fallback : undefined });
   else missing.push(need(wdUsed ? "vehicle.towRatingWd" : "vehicle.towRating"));
+  unbrakedLink(d, gtw, missing);
   if (wdUsed && v.tongueWeightLimitWd !== undefined)
     tw.push({ id: "vehicle.tongueWeightLimitWd", label: "Vehicle tongue-weight limit with weight distribution", symbol: "T_veh", rating: v.tongueWeightLimitWd });
   else if (v.tongueWeightLimit !== undefined)
@@ -153,8 +155,35 @@ function buildRatingSet(d: Derived): RatingSet {
     if (ex.gtwRating !== undefined) gtw.push({ id: "extender.gtwRating", label: "Extender rating", symbol: "R_ext", rating: ex.gtwRating });
     else if (t) unchecked.push("extender gross trailer weight rating (label on the extender)");
   }
+  // A receiver adapter and a ball reducer sleeve carry the whole trailer: a present one's label is required.
+  const ra = rig.receiverAdapter;
+  if (ra) {
+    if (ra.gtwRating !== undefined) gtw.push({ id: "receiverAdapter.gtwRating", label: "Receiver adapter rating", symbol: "R_adapt", rating: ra.gtwRating });
+    else if (t) missing.push(need("receiverAdapter.gtwRating"));
+    if (ra.twRating !== undefined) tw.push({ id: "receiverAdapter.twRating", label: "Receiver adapter tongue rating", symbol: "T_adapt", rating: ra.twRating });
+    else missing.push(need("receiverAdapter.twRating"));
+  }
+  const sl = t ? rig.ballSleeve : undefined;
+  if (sl) {
+    if (sl.gtwRating !== undefined) gtw.push({ id: "ballSleeve.gtwRating", label: "Ball reducer sleeve rating", symbol: "R_sleeve", rating: sl.gtwRating });
+    else missing.push(need("ballSleeve.gtwRating"));
+    if (sl.twRating !== undefined) tw.push({ id: "ballSleeve.twRating", label: "Ball reducer sleeve tongue rating", symbol: "T_sleeve", rating: sl.twRating });
+    else missing.push(need("ballSleeve.twRating"));
+  }
 
   return { gtw, tw, missing, unchecked };
+}
+
+/**
+ * The vehicle's own tow rating for a trailer without brakes: a link whenever the trailer has none (the maker's
+ * figure, often far below the braked one). Not entered for an unbraked trailer: missing, never a pass. Whether the
+ * law wants brakes at this weight is the local rules' business, not this link's.
+ */
+function unbrakedLink(d: Derived, gtw: RatingEntry[], missing: MissingField[]): void {
+  if (d.rig.trailer?.brakes !== "none") return;
+  const r = d.rig.vehicle.towRatingUnbraked;
+  if (r !== undefined) gtw.push({ id: "vehicle.towRatingUnbraked", label: "Vehicle tow rating without trailer brakes", symbol: "R_unbr", rating: r });
+  else missing.push(need("vehicle.towRatingUnbraked"));
 }
 
 function lowest(entries: RatingEntry[]): RatingEntry | undefined {

@@ -26,8 +26,11 @@ export function pickupRig(over: Record<string, unknown> = {}): RigInput {
       wheelbase: 145,
       // Geometry: 41 in to the pin hole + 9 in ball mount = 50 in to the ball
       rearAxleToPin: 41,
+      // Each tyre's maximum load, two per axle (invented)
+      tyreLoadFront: 2400,
+      tyreLoadRear: 2400,
     },
-    hitch: { class: 3, receiverSize: "2", gtwRating: 4500, twRating: 675, gtwRatingWd: 5000, twRatingWd: 675, receiverHeight: 26, pinToFascia: 5.5 },
+    hitch: { class: 3, receiverSize: "2", pinDiameter: "5/8", gtwRating: 4500, twRating: 675, gtwRatingWd: 5000, twRatingWd: 675, receiverHeight: 26, pinToFascia: 5.5 },
     trailer: {
       type: "travel",
       grossTrailerWeight: 4000,
@@ -38,10 +41,16 @@ export function pickupRig(over: Record<string, unknown> = {}): RigInput {
       ballSize: "2",
       couplerBallSize: "2",
       ballRating: 6000,
+      ballShankSize: "1",
       brakes: "electric",
       safetyChainRating: 6000,
+      // The trailer's own plate (invented): GVWR, two axles of 3,500 lb, tyres of 2,200 lb each
+      mam: 5200,
+      axleRating: 3500,
+      axleCount: 2,
+      tyreLoad: 2200,
     },
-    ballMount: { gtwRating: 6000, twRating: 800, drop: 6, length: 9 },
+    ballMount: { gtwRating: 6000, twRating: 800, drop: 6, length: 9, holeSize: "1" },
     load: { occupants: 300, cargo: 100, hitchHardware: 30 },
   };
   for (const [k, v] of Object.entries(over)) {
