@@ -112,6 +112,34 @@ describe("the two families added last", () => {
     expect(lesson.conclusion.cautions.join(" ")).toMatch(/[Cc]hock/);
   });
 
+  it("trailer's own ratings: 3,400 − 340 = 3,060 lb on one axle rated 3,000 lb is over", () => {
+    const { value, lesson } = keyFigure("the-axle-under-the-trailer");
+    // Statics: vertical balance of the trailer standing hitched, W_ax = GTW − TW = 3,400 − 340 = 3,060 lb
+    expect(value).toBe(3060);
+    // Statics: the axle's rating together, 1 × 3,000 = 3,000 lb; 3,000 − 3,060 = −60 lb
+    expect(keyFigure("the-axle-under-the-trailer", "trailer-axle-room").value).toBe(-60);
+    expect(lesson.conclusion.status).toBe("over");
+  });
+
+  it("tyres: two rear tyres of 1,600 lb carry 3,200 lb, under the 3,300 lb rear axle", () => {
+    const { value, lesson } = keyFigure("tyres-below-the-axle");
+    // Statics: an axle's load shared by its two tyres, 2 × 1,600 = 3,200 lb
+    expect(value).toBe(3200);
+    // Statics: 3,200 − 3,300 lb weighed hitched = −100 lb
+    expect(keyFigure("tyres-below-the-axle", "rear-tyre-room").value).toBe(-100);
+    expect(lesson.conclusion.status).toBe("over");
+  });
+
+  it("hardware fit: a 3/4 in shank in a 1 in hole leaves 1/4 in, a part to change", () => {
+    const { value, lesson } = keyFigure("a-ball-that-rocks");
+    // Geometry: 1 − 0.75 = 0.25 in of room round the shank
+    expect(value).toBe(0.25);
+    // Source: 15 CRR-NY 57.5 Table 1: a 2,800 lb trailer is class 2, smallest ball 2 in; the 2 in ball is 0 in over it
+    expect(keyFigure("a-ball-that-rocks", "ball-size-room").value).toBe(0);
+    // A part that does not fit is a set-up to change, not a rating exceeded
+    expect(lesson.conclusion.status).toBe("adjust");
+  });
+
   it("envelope: GCWR 13,500 − loaded truck 5,950 = 7,550 lb; at 12.5 % the 800 lb tongue limit allows 6,400 lb", () => {
     // Source: GM (Cadillac) owner's manuals (the combination must not exceed GCWR): 13,500 − (3,350 + 2,600) = 7,550 lb
     expect(keyFigure("how-heavy-a-trailer").value).toBe(7550);
