@@ -23,6 +23,11 @@ export interface Derived {
    * estimate; the larger of the two when both claim to be weighed or the entered figure's basis is not given.
    */
   tw?: number;
+  /**
+   * The lighter tongue weight the figures allow: what the trailer's own axles and tyres are judged with (a lighter
+   * tongue leaves more on them). The same as `tw` except when two figures disagree and `tw` is the larger.
+   */
+  twLow?: number;
   /** True when `tw` is an estimate (entered as one, or entered without saying it was weighed, and not weighed). */
   twEstimated: boolean;
   /** Where `tw` comes from. */
@@ -216,6 +221,7 @@ export function derive(rig: RigInput): Derived {
     wdUsed,
     gtw: t?.grossTrailerWeight,
     tw,
+    twLow: twSource === "larger" && t?.tongueWeight !== undefined && twMeasured !== undefined ? Math.min(t.tongueWeight, twMeasured) : tw,
     twEstimated,
     twSource,
     twMeasured,

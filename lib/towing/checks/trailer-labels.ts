@@ -16,6 +16,12 @@ const CAUTIONS = [
   "Load the trailer evenly side to side and keep the heavy items over or just ahead of its axles.",
 ];
 
+/** When two tongue-weight figures disagree, the trailer's axles are judged with the lighter one: said once. */
+export function lighterNote(d: Derived, c: Ctx): string | undefined {
+  if (d.twLow === undefined || d.tw === undefined || d.twLow === d.tw) return undefined;
+  return `The tongue-weight figures disagree (${fW(c, d.twLow)} and ${fW(c, d.tw)}): the trailer's own axles and tyres are judged with the lighter, which leaves more on them, until it is weighed again.`;
+}
+
 export function checkTrailerLabels(d: Derived, c: Ctx): TrailerLabelsResult | null {
   if (!d.hasTrailer) return null;
   const t = d.rig.trailer!;
@@ -66,8 +72,10 @@ export function checkTrailerLabels(d: Derived, c: Ctx): TrailerLabelsResult | nu
       });
   }
   let onAxles: number | undefined;
-  if (gtw !== undefined && d.tw !== undefined) {
-    onAxles = gtw - d.tw;
+  // The lighter tongue weight the figures allow leaves the most on the trailer's axles: the safe side here.
+  const tw = d.twLow;
+  if (gtw !== undefined && tw !== undefined) {
+    onAxles = gtw - tw;
     result.axleLoad = qW(c, onAxles);
     if (c.detail)
       steps.push({
@@ -75,9 +83,9 @@ export function checkTrailerLabels(d: Derived, c: Ctx): TrailerLabelsResult | nu
         title: "Load on the trailer's axles",
         formulaWords: `Gross trailer weight minus the ${pinLabel.toLowerCase()} resting on the hitch`,
         formula: "GTW - TW",
-        inputs: [iW(c, "GTW", "Gross trailer weight", gtw), iW(c, "TW", pinLabel, d.tw)],
+        inputs: [iW(c, "GTW", "Gross trailer weight", gtw), iW(c, "TW", pinLabel, tw)],
         result: rW(c, "W_ax", onAxles),
-        note: tongueWeightNote(d, c),
+        note: lighterNote(d, c) ?? tongueWeightNote(d, c),
       });
   }
   if (t.axleRating !== undefined && t.axleCount !== undefined) {
@@ -113,7 +121,7 @@ export function checkTrailerLabels(d: Derived, c: Ctx): TrailerLabelsResult | nu
   const cautions = CAUTIONS.slice();
   if (d.wdUsed) cautions.push("Weight distribution hands part of the hitch load back to the trailer's axles: they carry a little more than worked out here. Weigh the trailer's axles hitched, bars set, to be sure.");
   if (t.axleCount !== undefined && t.axleCount > 1) cautions.push("Several axles share the load only when the trailer rides level: a nose-up or nose-down trailer loads one axle more than the other.");
-  const note = tongueWeightNote(d, c);
+  const note = lighterNote(d, c) ?? tongueWeightNote(d, c);
   if (note) cautions.push(note);
   result.cautions = cautions;
 
@@ -135,7 +143,7 @@ export function checkTrailerLabels(d: Derived, c: Ctx): TrailerLabelsResult | nu
         ? overGvwr
           ? `The trailer weighs ${fW(c, gtw!)}, over its own GVWR of ${fW(c, t.mam!)}.`
           : `The trailer's axles carry ${fW(c, onAxles!)}, over their ${fW(c, capacity!)} together.`
-        : `${g.label === "Trailer GVWR" ? "The trailer's GVWR" : "The trailer's axles"} leave the least room: ${fW(c, result.actual.value / c.u.weightFactor)} of ${fW(c, result.limit.value / c.u.weightFactor)}.` +
+        : `${g.label === "Trailer GVWR" ? "The trailer's GVWR has" : "The trailer's axles have"} the least room: ${fW(c, result.actual.value / c.u.weightFactor)} of ${fW(c, result.limit.value / c.u.weightFactor)}.` +
           (result.status === "incomplete" ? " Some figures are missing." : "");
   return result;
 }

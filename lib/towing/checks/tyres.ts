@@ -13,6 +13,7 @@ import { needHitchLever, needTongueWeight, type Derived } from "../derive";
 import { need } from "../missing";
 import type { CheckStatus, MissingField, Step, TyresResult } from "../types";
 import { drivenAxles } from "./axle-loads";
+import { lighterNote } from "./trailer-labels";
 
 const FENDER_FIELDS = ["weightDistribution.fenderUnhitched", "weightDistribution.fenderHitched", "weightDistribution.fenderWithWd"] as const;
 
@@ -144,8 +145,9 @@ export function checkTyres(d: Derived, c: Ctx): TyresResult | null {
         inputs: [iN("n_tt", "Trailer tyres", n, ""), iW(c, "L_tt", "Trailer tyre load capacity (each tyre)", t.tyreLoad)],
         result: rW(c, "C_tt", cap),
       });
-    if (d.gtw !== undefined && d.tw !== undefined) {
-      const load = d.gtw - d.tw;
+    const tw = d.twLow;
+    if (d.gtw !== undefined && tw !== undefined) {
+      const load = d.gtw - tw;
       compare("trailer.tyreLoad", "Trailer tyres", load, cap);
       if (c.detail)
         steps.push({
@@ -153,8 +155,9 @@ export function checkTyres(d: Derived, c: Ctx): TyresResult | null {
           title: "Room left on the trailer's tyres",
           formulaWords: `The trailer tyres' capacity minus the load on the trailer's axles (gross trailer weight less the ${d.bedHitch ? "pin" : "tongue"} weight)`,
           formula: "C_tt - (GTW - TW)",
-          inputs: [iW(c, "C_tt", "Trailer tyres together", cap), iW(c, "GTW", "Gross trailer weight", d.gtw), iW(c, "TW", d.bedHitch ? "Pin weight" : "Tongue weight", d.tw)],
+          inputs: [iW(c, "C_tt", "Trailer tyres together", cap), iW(c, "GTW", "Gross trailer weight", d.gtw), iW(c, "TW", d.bedHitch ? "Pin weight" : "Tongue weight", tw)],
           result: rW(c, "M_tt", cap - load),
+          note: lighterNote(d, c),
         });
     }
   }

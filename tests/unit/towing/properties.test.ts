@@ -8,6 +8,8 @@ import {
   BALL_SIZES,
   BRAKE_TYPES,
   convertRig,
+  PIN_SIZES,
+  SHANK_SIZES,
   evaluateRig,
   evaluateRigFast,
   FIELD_RANGES,
@@ -56,6 +58,10 @@ const vehicle = fc.record({
   rearAxleToHitch: o("vehicle.rearAxleToHitch"),
   rearAxleToBedHitch: o("vehicle.rearAxleToBedHitch"),
   towRatingBed: o("vehicle.towRatingBed"),
+  towRatingUnbraked: o("vehicle.towRatingUnbraked"),
+  tyreLoadFront: o("vehicle.tyreLoadFront"),
+  tyreLoadRear: o("vehicle.tyreLoadRear"),
+  dualRearWheels: opt(fc.boolean()),
   wdRequiredAbove: o("vehicle.wdRequiredAbove"),
   departureAngle: o("vehicle.departureAngle"),
   tongueShareBand: opt(
@@ -66,6 +72,7 @@ const hitch = opt(
   fc.record({
     class: opt(fc.integer({ min: 1, max: 5 })),
     receiverSize: opt(fc.constantFrom(...RECEIVER_SIZES)),
+    pinDiameter: opt(fc.constantFrom(...PIN_SIZES)),
     gtwRating: o("hitch.gtwRating"),
     twRating: o("hitch.twRating"),
     gtwRatingWd: o("hitch.gtwRatingWd"),
@@ -94,8 +101,13 @@ const trailer = fc.record({
   couplerBallSize: opt(fc.constantFrom(...BALL_SIZES)),
   ballSize: opt(fc.constantFrom(...BALL_SIZES)),
   ballRating: o("trailer.ballRating"),
+  ballShankSize: opt(fc.constantFrom(...SHANK_SIZES)),
   brakes: opt(fc.constantFrom(...BRAKE_TYPES)),
   safetyChainRating: o("trailer.safetyChainRating"),
+  mam: o("trailer.mam"),
+  axleRating: o("trailer.axleRating"),
+  axleCount: opt(fc.integer({ min: 1, max: 4 })),
+  tyreLoad: o("trailer.tyreLoad"),
 });
 const accessory = fc.record({
   type: fc.constantFrom(...ACCESSORY_TYPES),
@@ -119,8 +131,11 @@ const rigArb: fc.Arbitrary<RigInput> = fc
         drop: o("ballMount.drop"),
         length: o("ballMount.length"),
         squatAllowance: o("ballMount.squatAllowance"),
+        holeSize: opt(fc.constantFrom(...SHANK_SIZES)),
       }),
     ),
+    receiverAdapter: opt(fc.record({ gtwRating: o("receiverAdapter.gtwRating"), twRating: o("receiverAdapter.twRating") })),
+    ballSleeve: opt(fc.record({ gtwRating: o("ballSleeve.gtwRating"), twRating: o("ballSleeve.twRating") })),
     extender: opt(fc.record({ length: num("extender.length"), gtwRating: o("extender.gtwRating"), twRating: o("extender.twRating") })),
     weightDistribution: opt(
       fc.record({
@@ -281,6 +296,11 @@ describe("properties over the valid input space", () => {
       ["vehicle", "towRating", "vehicle.towRating"],
       ["vehicle", "tongueWeightLimit", "vehicle.tongueWeightLimit"],
       ["weightDistribution", "tongueRating", "weightDistribution.tongueRating"],
+      ["vehicle", "towRatingUnbraked", "vehicle.towRatingUnbraked"],
+      ["receiverAdapter", "gtwRating", "receiverAdapter.gtwRating"],
+      ["receiverAdapter", "twRating", "receiverAdapter.twRating"],
+      ["ballSleeve", "gtwRating", "ballSleeve.gtwRating"],
+      ["ballSleeve", "twRating", "ballSleeve.twRating"],
     ];
     fc.assert(
       fc.property(rigArb, fc.constantFrom(...LINKS), fc.integer({ min: 0, max: 6000 }), (rig, [section, key, path], value) => {
@@ -310,6 +330,31 @@ describe("properties over the valid input space", () => {
           for (const c of r.checks) if (c.missing?.length) expect(["incomplete", "over"], `${c.id}`).toContain(c.status);
           if (!r.verdict.complete) expect(["incomplete", "over"]).toContain(r.verdict.level);
           if (r.verdict.level === "within" || r.verdict.level === "tight") for (const c of r.checks) expect(c.missing ?? []).toEqual([]);
+        }
+      }),
+      { numRuns: RUNS },
+    );
+  });
+
+  it("the new checks: missing figures never read within, the hardware fit is never over, and tyres without figures are never within", () => {
+    fc.assert(
+      fc.property(rigArb, (rig) => {
+        for (const r of [evaluateRig(rig), evaluateRig(convertRig(rig, "metric"))]) {
+          for (const id of ["hardware-fit", "trailer-labels", "tyres"] as const) {
+            const c = r.checks.find((x) => x.id === id);
+            if (!c) continue;
+            if (c.missing?.length) expect(["incomplete", "over"], id).toContain(c.status);
+          }
+          // Sizes and conventions ask for a part to change at most: a rating exceeded is the weakest link's business.
+          const hw = r.checks.find((x) => x.id === "hardware-fit");
+          if (hw) expect(hw.status).not.toBe("over");
+          const ty = r.checks.find((x) => x.id === "tyres");
+          const v = rig.vehicle;
+          if (ty && (v.tyreLoadFront === undefined || v.tyreLoadRear === undefined || rig.trailer?.tyreLoad === undefined))
+            expect(["incomplete", "over"]).toContain(ty.status);
+          // With no brakes and no unbraked rating, the weakest link is never a pass.
+          const wl = r.checks.find((x) => x.id === "weakest-link");
+          if (wl && rig.trailer?.brakes === "none" && v.towRatingUnbraked === undefined) expect(["incomplete", "over"]).toContain(wl.status);
         }
       }),
       { numRuns: RUNS },

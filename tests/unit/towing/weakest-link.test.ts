@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { convertRig, evaluateRig, type WeakestLinkResult } from "@/lib/towing";
 import { CLASS_MAX_GTW } from "@/lib/towing/reference";
-import { check, pickupRig } from "./helpers";
+import { check, pickupRig, rig } from "./helpers";
 
 const wl = (r: ReturnType<typeof pickupRig>) => check<WeakestLinkResult>(evaluateRig(r), "weakest-link");
 
@@ -89,5 +89,68 @@ describe("weakest link", () => {
     // Arithmetic: 4,500 − 4,000 = 500 lb left = 226.796185 kg (exact definition of the pound, as above)
     expect(met.margin?.value).toBeCloseTo(226.796185, 6);
     expect(met.status).toBe(imp.status);
+  });
+});
+
+describe("weakest link: the unbraked tow rating, receiver adapters and reducer sleeves", () => {
+  it("takes the vehicle's unbraked tow rating as a link when the trailer has no brakes", () => {
+    // Source: Washington WAC 204-70-060 (the weakest component governs); vehicle owner's manuals give the unbraked
+    // figure. 1,650 − 4,000 = −2,350 lb: over
+    const res = wl(pickupRig({ vehicle: { towRatingUnbraked: 1650 }, trailer: { brakes: "none" } }));
+    const link = res.links.find((l) => l.id === "vehicle.towRatingUnbraked")!;
+    expect(link.rating.value).toBe(1650);
+    expect(link.margin!.value).toBe(-2350);
+    expect(res.status).toBe("over");
+    expect(res.governingGrossTrailerWeight!.id).toBe("vehicle.towRatingUnbraked");
+    expect(res.advice.join(" ")).toMatch(/no part can raise the vehicle's own rating.*a trailer with brakes/);
+  });
+
+  it("is incomplete, not a pass, without the unbraked figure when the trailer has no brakes", () => {
+    const res = wl(pickupRig({ trailer: { brakes: "none", grossTrailerWeight: 1200, tongueWeight: 150 } }));
+    expect(res.status).toBe("incomplete");
+    expect(res.missing!.map((m) => m.field)).toContain("vehicle.towRatingUnbraked");
+  });
+
+  it("leaves the unbraked figure out when the trailer has brakes", () => {
+    const res = wl(pickupRig({ vehicle: { towRatingUnbraked: 1650 } }));
+    expect(res.links.some((l) => l.id === "vehicle.towRatingUnbraked")).toBe(false);
+    expect(res.status).toBe("within");
+  });
+
+  it("metric: a 750 kg unbraked rating under a 700 kg trailer leaves 50 kg, tight", () => {
+    // Arithmetic: 750 − 700 = 50 kg, 6.7 % of the rating: under the 10 % threshold
+    const res = check<WeakestLinkResult>(
+      evaluateRig(
+        rig({
+          units: "metric",
+          vehicle: { towRating: 2000, towRatingUnbraked: 750, tongueWeightLimit: 100 },
+          hitch: { gtwRating: 2000, twRating: 100 },
+          trailer: { type: "utility", grossTrailerWeight: 700, tongueWeight: 60, tongueWeightBasis: "measured", ballRating: 1500, brakes: "none" },
+        }),
+      ),
+      "weakest-link",
+    );
+    expect(res.governingGrossTrailerWeight!.id).toBe("vehicle.towRatingUnbraked");
+    expect(res.governingGrossTrailerWeight!.unit).toBe("kg");
+    expect(res.margin!.value).toBeCloseTo(50, 9);
+    expect(res.status).toBe("tight");
+  });
+
+  it("a receiver adapter is a link of its own: its rating exceeded is over, a missing one incomplete", () => {
+    // Source: WAC 204-70-060: the adapter's 3,500 lb is the lowest gross rating; 3,500 − 4,000 = −500 lb
+    const over = wl(pickupRig({ receiverAdapter: { gtwRating: 3500, twRating: 600 } }));
+    expect(over.governingGrossTrailerWeight!.id).toBe("receiverAdapter.gtwRating");
+    expect(over.links.find((l) => l.id === "receiverAdapter.gtwRating")!.margin!.value).toBe(-500);
+    expect(over.status).toBe("over");
+    const blank = wl(pickupRig({ receiverAdapter: {} }));
+    expect(blank.status).toBe("incomplete");
+    expect(blank.missing!.map((m) => m.field)).toEqual(expect.arrayContaining(["receiverAdapter.gtwRating", "receiverAdapter.twRating"]));
+  });
+
+  it("a reducer sleeve's tongue rating exceeded is over", () => {
+    // Source: WAC 204-70-060: 400 − 500 = −100 lb on the sleeve
+    const res = wl(pickupRig({ trailer: { ballShankSize: "3/4" }, ballSleeve: { gtwRating: 6000, twRating: 400 } }));
+    expect(res.links.find((l) => l.id === "ballSleeve.twRating")!.margin!.value).toBe(-100);
+    expect(res.status).toBe("over");
   });
 });
