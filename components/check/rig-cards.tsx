@@ -11,6 +11,7 @@ import { formatQuantity } from "@/lib/format";
 import { ACCESSORY_TYPES, BALL_SIZES, BRAKE_TYPES, RECEIVER_SIZES, TRAILER_TYPES, type AccessoryType, type HitchType, type TrailerType } from "@/lib/towing";
 import { TermHelp } from "@/components/glossary/term-help";
 import { ChoiceField, FieldGrid, FieldGroup, MoreMeasurements, NumField, unitFor, useGlossary, useUnits, YesNoField } from "./field-parts";
+import { HitchHardwareFields, TrailerPlateFields, VehicleTyreFields } from "./hardware-fields";
 import type { GlossaryId } from "@/lib/towing/rules/types";
 import type { HitchedKind, RigFormValues } from "./rig-form";
 
@@ -212,6 +213,7 @@ export function VehicleFields({ tools }: { tools?: ReactNode }) {
           <NumField name="load.hitchHardware" label="Hitch hardware" kind="mass" help={<TermHelp term="hitch-hardware">Ball mount, or weight-distribution head and bars: the maker&rsquo;s sheet or a bathroom scale.</TermHelp>} />
         </FieldGrid>
       </FieldGroup>
+      <VehicleTyreFields />
       <MoreMeasurements>
         <FieldGrid>
           <NumField name="vehicle.towRatingWd" label="Tow rating with weight distribution" kind="mass" help="Owner's manual, towing section." />
@@ -298,6 +300,7 @@ export function HitchFields({ kind }: { kind: HitchedKind }) {
           </div>
         </FieldGroup>
       ) : null}
+      <HitchHardwareFields kind={kind} />
       {bed ? null : (
       <FieldGroup title="Extender" note="Only if one is fitted: its own label gives its rating, often lower than the hitch's.">
         <FieldGrid>
@@ -423,6 +426,7 @@ export function TrailerFields({ tools }: { tools?: ReactNode }) {
           <NumField name="trailer.couplingDValue" label="Coupler D value (marked)" kind="force" help="On the coupler's plate, in kN, where it is built to UN Regulation No. 55." />
         </FieldGrid>
       </FieldGroup>
+      <TrailerPlateFields />
       {bed ? null : (
       <FieldGroup title="Weight distribution" note="Front fender height: ground to the lip of the front wheel opening, straight above the wheel centre, on level ground. Unhitched, hitched with the spring bars released, then hitched with the bars set. Chock the trailer first.">
         <div className="space-y-4">

@@ -77,6 +77,13 @@ export function toRigCandidate(values: RigFormValues, kind: HitchedKind): unknow
     const group = isPlain(v[key]) ? prune(v[key] as Plain) : undefined;
     if (group) out[key] = group;
   }
+  // A receiver adapter or a reducer sleeve is in the rig when its box is ticked or a rating is typed.
+  const fitted = (key: "receiverAdapter" | "ballSleeve") => {
+    const group = isPlain(v[key]) ? prune(v[key] as Plain) : undefined;
+    if (!group) return;
+    const { fitted: ticked, ...ratings } = group;
+    if (ticked === true || Object.keys(ratings).length) out[key] = ratings;
+  };
   if (kind === "trailer") {
     const trailer = isPlain(v.trailer) ? prune(v.trailer) : undefined;
     out.trailer = { type: "travel", ...trailer };
@@ -84,6 +91,10 @@ export function toRigCandidate(values: RigFormValues, kind: HitchedKind): unknow
     // receiver stays in the form (switching back keeps it) but does not go into the rig.
     const bed = trailer?.hitchType === "fifth-wheel" || trailer?.hitchType === "gooseneck";
     if (bed) delete out.extender;
+    else {
+      fitted("receiverAdapter");
+      fitted("ballSleeve");
+    }
     const mount = !bed && isPlain(v.ballMount) ? prune(v.ballMount) : undefined;
     if (mount) out.ballMount = mount;
     const wd = !bed && isPlain(v.weightDistribution) ? prune(v.weightDistribution) : undefined;
@@ -92,6 +103,7 @@ export function toRigCandidate(values: RigFormValues, kind: HitchedKind): unknow
   } else {
     const accessory = isPlain(v.accessory) ? prune(v.accessory) : undefined;
     out.accessory = { type: "platform-rack", ...accessory };
+    fitted("receiverAdapter");
   }
   return out;
 }
@@ -160,6 +172,8 @@ export function emptyFormValues(units: UnitSystem): RigFormValues {
     trailer: { type: "travel" },
     ballMount: {},
     extender: {},
+    receiverAdapter: {},
+    ballSleeve: {},
     weightDistribution: { used: false },
     accessory: { type: "platform-rack" },
     driver: {},
@@ -171,6 +185,8 @@ export function formValuesFromRig(rig: RigInput | undefined, units: UnitSystem):
   const empty = emptyFormValues(units);
   if (!rig) return empty;
   const converted = rigPartForForm(rig, units) as Plain;
+  // A part the rig carries shows as fitted, its ratings typed or not.
+  for (const key of ["receiverAdapter", "ballSleeve"]) if (isPlain(converted[key])) converted[key] = { ...(converted[key] as Plain), fitted: true };
   return mergeForm(empty, converted);
 }
 
@@ -201,6 +217,6 @@ export type CardId = "vehicle" | "hitch" | "hitched";
 export function cardOf(path: string): CardId {
   const head = path.split(".")[0];
   if (head === "vehicle" || head === "load") return "vehicle";
-  if (head === "hitch" || head === "ballMount" || head === "extender") return "hitch";
+  if (head === "hitch" || head === "ballMount" || head === "extender" || head === "receiverAdapter" || head === "ballSleeve") return "hitch";
   return "hitched";
 }

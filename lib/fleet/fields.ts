@@ -3,7 +3,7 @@
  * label. One list drives the forms, the CSV template, the import mapping and the export, so they never drift.
  * Pure: no server code, no React.
  */
-import { ACCESSORY_TYPES, BALL_SIZES, BRAKE_TYPES, FIELD_RANGES, HITCH_TYPES, RECEIVER_SIZES, TRAILER_TYPES } from "../towing/input";
+import { ACCESSORY_TYPES, BALL_SIZES, BRAKE_TYPES, FIELD_RANGES, HITCH_TYPES, PIN_SIZES, RECEIVER_SIZES, SHANK_SIZES, TRAILER_TYPES } from "../towing/input";
 
 export const PROFILE_KINDS = ["vehicles", "trailers", "accessories"] as const;
 export type ProfileKind = (typeof PROFILE_KINDS)[number];
@@ -61,6 +61,10 @@ export const VEHICLE_FIELDS: ProfileField[] = [
   num("vehicle.tongueWeightLimit", "tongue_max", "Ratings", "Owner's manual, towing section."),
   num("vehicle.tongueWeightLimitWd", "tongue_max_wd", "Ratings"),
   num("vehicle.towRatingBed", "tow_max_bed_hitch", "Ratings", "The maker's figure for a fifth wheel or gooseneck, where it gives one apart from the conventional figure."),
+  num("vehicle.towRatingUnbraked", "tow_max_unbraked", "Ratings", "The maker's figure for a trailer without brakes; a limit whenever the trailer has none."),
+  num("vehicle.tyreLoadFront", "tyre_load_front", "Tyres", "Each front tyre's maximum load, moulded on its sidewall."),
+  num("vehicle.tyreLoadRear", "tyre_load_rear", "Tyres", "Each rear tyre's maximum load, moulded on its sidewall."),
+  { path: "vehicle.dualRearWheels", column: "dual_rear_wheels", label: "Dual rear wheels", type: "yes-no", group: "Tyres", help: "Four tyres on the rear axle." },
   num("vehicle.wdRequiredAbove", "wd_needed_above", "Ratings", "The trailer weight above which the maker requires weight distribution."),
   num("vehicle.curbWeight", "curb_weight", "Weights", "Weighed empty with a full tank, or the maker's figure."),
   num("vehicle.payloadLabel", "payload_on_label", "Weights", "The tire and loading label's \"combined weight of occupants and cargo\"."),
@@ -72,6 +76,7 @@ export const VEHICLE_FIELDS: ProfileField[] = [
   num("vehicle.departureAngle", "departure_angle", "Measurements", "Owner's manual, dimensions page (the angle as 49 CFR 523.2 defines it)."),
   { path: "hitch.class", column: "hitch_class", label: "Hitch class", type: "integer", choices: ["1", "2", "3", "4", "5"], group: "Hitch", help: "On the hitch's label. The class sets a ceiling; the label's own rating governs (\"Class 5\" is trade usage)." },
   choice("hitch.receiverSize", "receiver_opening", "Receiver size (in)", RECEIVER_SIZES, "Hitch"),
+  choice("hitch.pinDiameter", "hitch_pin", "Hitch pin (in)", PIN_SIZES, "Hitch"),
   num("hitch.gtwRating", "hitch_gtw", "Hitch", "On the hitch's own label."),
   num("hitch.twRating", "hitch_tw", "Hitch", "On the hitch's own label."),
   num("hitch.gtwRatingWd", "hitch_gtw_wd", "Hitch"),
@@ -96,12 +101,18 @@ export const TRAILER_FIELDS: ProfileField[] = [
   choice("trailer.couplerBallSize", "coupler_ball", "Coupler ball size (in)", BALL_SIZES, "Coupler"),
   choice("trailer.ballSize", "ball_size", "Ball size (in)", BALL_SIZES, "Coupler"),
   num("trailer.ballRating", "ball_rating", "Coupler"),
+  choice("trailer.ballShankSize", "ball_shank", "Ball shank (in)", SHANK_SIZES, "Coupler"),
   choice("trailer.brakes", "brakes", "Brakes", BRAKE_TYPES, "Trailer"),
   num("trailer.safetyChainRating", "chain_rating", "Coupler"),
+  num("trailer.mam", "trailer_gvwr", "Trailer's plate", "The trailer's GVWR (plated maximum mass)."),
+  num("trailer.axleRating", "axle_rating", "Trailer's plate", "Each axle's rating (GAWR), from the trailer's plate."),
+  { path: "trailer.axleCount", column: "axles", label: "Trailer axles", type: "integer", choices: ["1", "2", "3", "4"], group: "Trailer's plate" },
+  num("trailer.tyreLoad", "tyre_load", "Trailer's plate", "Each trailer tyre's maximum load, moulded on its sidewall."),
   num("ballMount.gtwRating", "mount_gtw", "Ball mount"),
   num("ballMount.twRating", "mount_tw", "Ball mount"),
   num("ballMount.drop", "mount_drop", "Ball mount", "Top of the shank down to the top of the ball platform; negative for a rise."),
   num("ballMount.length", "mount_length", "Ball mount"),
+  choice("ballMount.holeSize", "mount_hole", "Ball mount hole (in)", SHANK_SIZES, "Ball mount"),
   { path: "weightDistribution.used", column: "wd_fitted", label: "Weight distribution used", type: "yes-no", group: "Weight distribution" },
   num("weightDistribution.tongueRating", "wd_tongue_rating", "Weight distribution", "Label on the spring bars or head."),
 ];
