@@ -14,8 +14,9 @@ export const DEMO_VEHICLES: Array<{ name: string } & VehiclePart> = [
     vehicle: {
       towRating: 5000, towRatingWd: 9000, tongueWeightLimit: 500, tongueWeightLimitWd: 900, gvwr: 7000, curbWeight: 5100,
       gcwr: 14000, gawrFront: 3700, gawrRear: 4000, axleWeights: { front: 3150, rear: 2500 }, wheelbase: 145, rearAxleToPin: 41, wdRequiredAbove: 5000, departureAngle: 24,
+      towRatingUnbraked: 1650, tyreLoadFront: 2400, tyreLoadRear: 2600,
     },
-    hitch: { class: 4, receiverSize: "2", gtwRating: 6000, twRating: 600, gtwRatingWd: 10000, twRatingWd: 1000, receiverHeight: 21, pinToFascia: 5.5 },
+    hitch: { class: 4, receiverSize: "2", pinDiameter: "5/8", gtwRating: 6000, twRating: 600, gtwRatingWd: 10000, twRatingWd: 1000, receiverHeight: 21, pinToFascia: 5.5 },
     load: { occupants: 350, cargo: 150, hitchHardware: 50 },
   },
   {
@@ -23,8 +24,9 @@ export const DEMO_VEHICLES: Array<{ name: string } & VehiclePart> = [
     vehicle: {
       towRating: 6500, towRatingWd: 6500, tongueWeightLimit: 650, gvwr: 6400, curbWeight: 4800, gcwr: 11500,
       gawrFront: 3200, gawrRear: 3500, axleWeights: { front: 2750, rear: 2525 }, wheelbase: 120, rearAxleToPin: 37, departureAngle: 22,
+      towRatingUnbraked: 2000, tyreLoadFront: 1900, tyreLoadRear: 2000,
     },
-    hitch: { class: 3, receiverSize: "2", gtwRating: 5000, twRating: 500, gtwRatingWd: 6500, twRatingWd: 650, receiverHeight: 19, pinToFascia: 4 },
+    hitch: { class: 3, receiverSize: "2", pinDiameter: "5/8", gtwRating: 5000, twRating: 500, gtwRatingWd: 6500, twRatingWd: 650, receiverHeight: 19, pinToFascia: 4 },
     load: { occupants: 320, cargo: 120, hitchHardware: 35 },
   },
   {
@@ -32,8 +34,9 @@ export const DEMO_VEHICLES: Array<{ name: string } & VehiclePart> = [
     vehicle: {
       towRating: 3500, tongueWeightLimit: 350, gvwr: 5200, curbWeight: 3900, gcwr: 8000, gawrFront: 2700, gawrRear: 2750,
       axleWeights: { front: 2400, rear: 1925 }, wheelbase: 110, rearAxleToPin: 32, departureAngle: 21,
+      towRatingUnbraked: 2500, tyreLoadFront: 1600, tyreLoadRear: 1600,
     },
-    hitch: { class: 2, receiverSize: "2", gtwRating: 3500, twRating: 350, receiverHeight: 14, pinToFascia: 5.5 },
+    hitch: { class: 2, receiverSize: "2", pinDiameter: "5/8", gtwRating: 3500, twRating: 350, receiverHeight: 14, pinToFascia: 5.5 },
     load: { occupants: 300, cargo: 100, hitchHardware: 25 },
   },
 ];
@@ -43,26 +46,29 @@ export const DEMO_TRAILERS: Array<{ name: string } & TrailerPart> = [
     name: "Bramblecote 24 travel trailer",
     trailer: {
       type: "travel", grossTrailerWeight: 6200, tongueWeight: 800, tongueWeightBasis: "measured", couplerHeight: 18, couplerRating: 10000,
-      couplerBallSize: "2-5/16", ballSize: "2-5/16", ballRating: 10000, brakes: "electric", safetyChainRating: 7000,
+      couplerBallSize: "2-5/16", ballSize: "2-5/16", ballRating: 10000, ballShankSize: "1-1/4", brakes: "electric", safetyChainRating: 7000,
+      mam: 7500, axleRating: 3500, axleCount: 2, tyreLoad: 2150,
     },
-    ballMount: { gtwRating: 10000, twRating: 1000, drop: 3, length: 9 },
+    ballMount: { gtwRating: 10000, twRating: 1000, drop: 3, length: 9, holeSize: "1-1/4" },
     weightDistribution: { used: true, tongueRating: 1000, fenderUnhitched: 39.5, fenderHitched: 40.6, fenderWithWd: 40.0, restorationTarget: 50 },
   },
   {
     name: "Fenmoor 17 runabout on its trailer",
     trailer: {
       type: "boat", grossTrailerWeight: 3300, tongueWeight: 300, tongueWeightBasis: "measured", couplerHeight: 16, couplerRating: 5000,
-      couplerBallSize: "2", ballSize: "2", ballRating: 5000, brakes: "surge", safetyChainRating: 5000,
+      couplerBallSize: "2", ballSize: "2", ballRating: 5000, ballShankSize: "1", brakes: "surge", safetyChainRating: 5000,
+      mam: 3800, axleRating: 3500, axleCount: 1, tyreLoad: 1800,
     },
-    ballMount: { gtwRating: 5000, twRating: 500, drop: 2, length: 8 },
+    ballMount: { gtwRating: 5000, twRating: 500, drop: 2, length: 8, holeSize: "1" },
   },
   {
     name: "Ploughwright 6×10 utility trailer",
     trailer: {
       type: "utility", grossTrailerWeight: 2200, tongueWeight: 260, tongueWeightBasis: "estimated", couplerHeight: 17, couplerRating: 3500,
-      couplerBallSize: "2", ballSize: "2", ballRating: 3500, brakes: "none", safetyChainRating: 3500,
+      couplerBallSize: "2", ballSize: "2", ballRating: 3500, ballShankSize: "1", brakes: "none", safetyChainRating: 3500,
+      mam: 2990, axleRating: 3000, axleCount: 1, tyreLoad: 1500,
     },
-    ballMount: { gtwRating: 5000, twRating: 500, drop: 0, length: 8 },
+    ballMount: { gtwRating: 5000, twRating: 500, drop: 0, length: 8, holeSize: "1" },
   },
 ];
 

@@ -65,9 +65,9 @@ export const MIN_BALL_BY_CLASS: Record<number, string | undefined> = {
 /** Receiver openings a hitch class usually has. Common practice, no published source (SAE J684 sets no opening). */
 export const RECEIVERS_BY_CLASS: Record<number, readonly string[]> = {
   1: ["1-1/4"],
-  2: ["1-1/4"],
+  2: ["1-1/4", "2"],
   3: ["2"],
-  4: ["2"],
+  4: ["2", "2-1/2"],
   5: ["2", "2-1/2", "3"],
 };
 
