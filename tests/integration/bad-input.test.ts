@@ -54,6 +54,9 @@ function rigFields(prefix: string): FieldSpec[] {
     { path: `${prefix}trailer.mam`, kind: "measure" },
     { path: `${prefix}hitch.dValue`, kind: "measure" },
     { path: `${prefix}driver.licence`, kind: "enum" },
+    { path: `${prefix}vehicle.tyreLoadRear`, kind: "measure" },
+    { path: `${prefix}hitch.pinDiameter`, kind: "enum" },
+    { path: `${prefix}receiverAdapter.twRating`, kind: "measure" },
   ];
 }
 
