@@ -56,7 +56,7 @@ function rigFields(prefix: string): FieldSpec[] {
     { path: `${prefix}driver.licence`, kind: "enum" },
     { path: `${prefix}vehicle.tyreLoadRear`, kind: "measure" },
     { path: `${prefix}hitch.pinDiameter`, kind: "enum" },
-    { path: `${prefix}receiverAdapter.twRating`, kind: "measure" },
+    { path: `${prefix}trailer.axleRating`, kind: "measure" },
   ];
 }
 
