@@ -5,7 +5,7 @@ import { courseLessons, courses, lessons, practiceAttempts, savedChecks, users }
 import { can, type Permission } from "@/lib/roles";
 import type { RigInput } from "@/lib/towing/input";
 import { libraryExample } from "@/lib/training/library";
-import { lessonGap, markAttempt, prepareLesson, type MarkedStep, type PreparedLesson } from "@/lib/training/prepare";
+import { lessonGap, markAttempt, prepareLesson, type MarkedChoice, type MarkedStep, type PreparedLesson } from "@/lib/training/prepare";
 import type { AttemptInput, LessonInput } from "@/lib/validation/training";
 import type { AccessContext } from "./access";
 import { absoluteUrl } from "./mail";
@@ -329,7 +329,7 @@ export async function moveLessonInCourse(access: AccessContext, courseId: string
 // Practice
 
 export type AttemptWrite =
-  | { ok: true; correct: number; total: number; marked: MarkedStep[] }
+  | { ok: true; correct: number; total: number; marked: MarkedStep[]; choices: MarkedChoice[] }
   | { ok: false; message: string; fieldErrors?: Record<string, string[]> };
 
 /** Marks the learner's answers against the core's own steps, here on the server, and keeps the attempt. */
@@ -337,7 +337,7 @@ export async function recordAttempt(access: AccessContext, input: AttemptInput):
   assertCan(access, "training.practise");
   const found = await getPreparedLesson(access, input.lessonId);
   if (!found?.prepared) return { ok: false, message: "That example is not open for practice in this organisation." };
-  const marked = markAttempt(found.prepared.steps, input.answers);
+  const marked = markAttempt(found.prepared.steps, input.answers, found.prepared.questions, input.choices);
   if (!marked.ok) return { ok: false, message: "Some answers need attention.", fieldErrors: marked.fieldErrors };
   const db = await getDb();
   await db.insert(practiceAttempts).values({
@@ -345,11 +345,12 @@ export async function recordAttempt(access: AccessContext, input: AttemptInput):
     organisationId: access.organisation.id,
     lessonId: input.lessonId,
     userId: access.user.id,
-    answers: marked.marked,
+    // The steps as typed, then each choice question with the chosen id: both count in the score.
+    answers: [...marked.marked, ...marked.choices],
     correct: marked.correct,
     total: marked.total,
   });
-  return { ok: true, correct: marked.correct, total: marked.total, marked: marked.marked };
+  return { ok: true, correct: marked.correct, total: marked.total, marked: marked.marked, choices: marked.choices };
 }
 
 export interface ResultRow {

@@ -7,6 +7,8 @@ import { evaluateRig, GENERAL_CAUTIONS } from "@/lib/towing";
 import type { RigInput } from "@/lib/towing/input";
 import type { CheckStatus, Step } from "@/lib/towing/types";
 import { markAnswer } from "./answers";
+import { markChoice, type ChoiceQuestion, type ChoiceQuestionId } from "./choice-answers";
+import { choiceQuestions } from "./questions";
 import { formulaParts, substitutedParts, type FormulaPart } from "./formula";
 
 export interface PreparedStep extends Step {
@@ -26,6 +28,8 @@ export interface LessonText {
 export interface PreparedLesson extends LessonText {
   units: "imperial" | "metric";
   steps: PreparedStep[];
+  /** "Which limit governs?" and "What is the next action?", made from the same evaluation. */
+  questions: ChoiceQuestion[];
   conclusion: {
     status: CheckStatus;
     title: string;
@@ -54,6 +58,7 @@ export function prepareLesson(text: LessonText, rig: RigInput, tightMarginRatio?
     ...text,
     units: rig.units,
     steps: prepareSteps(check.steps),
+    questions: choiceQuestions(result, rig, text.checkId),
     conclusion: {
       status: check.status,
       title: check.title,
@@ -81,12 +86,22 @@ export interface MarkedStep {
   correct: boolean;
 }
 
+/** A choice question as kept: the choice's stable id, never its position. */
+export interface MarkedChoice {
+  questionId: ChoiceQuestionId;
+  choiceId: string;
+  correct: boolean;
+}
+
 export type MarkedAttempt =
-  | { ok: true; marked: MarkedStep[]; correct: number; total: number }
+  | { ok: true; marked: MarkedStep[]; choices: MarkedChoice[]; correct: number; total: number }
   | { ok: false; fieldErrors: Record<string, string[]> };
 
-/** Marks a whole attempt against the steps; any unreadable or missing answer is a field error. */
-export function markAttempt(steps: Step[], answers: Record<string, string>): MarkedAttempt {
+/**
+ * Marks a whole attempt against the steps and the choice questions; an unreadable or missing answer, a choice
+ * that is not one of its question's, or an answer to a question the lesson does not ask is a field error.
+ */
+export function markAttempt(steps: Step[], answers: Record<string, string>, questions: ChoiceQuestion[] = [], choices: Record<string, string> = {}): MarkedAttempt {
   const fieldErrors: Record<string, string[]> = {};
   const marked: MarkedStep[] = [];
   for (const step of steps) {
@@ -95,6 +110,15 @@ export function markAttempt(steps: Step[], answers: Record<string, string>): Mar
     if (mark.status === "invalid") fieldErrors[`answers.${step.id}`] = [mark.error];
     else marked.push({ stepId: step.id, answer, correct: mark.status === "right" });
   }
+  const chosen: MarkedChoice[] = [];
+  for (const question of questions) {
+    const mark = markChoice(question, choices[question.id]);
+    if (mark.status === "invalid") fieldErrors[`choices.${question.id}`] = [mark.error];
+    else chosen.push({ questionId: question.id, choiceId: mark.choiceId, correct: mark.status === "right" });
+  }
+  for (const key of Object.keys(choices))
+    if (!questions.some((question) => question.id === key)) fieldErrors[`choices.${key}`] = ["This example asks no such question."];
   if (Object.keys(fieldErrors).length) return { ok: false, fieldErrors };
-  return { ok: true, marked, correct: marked.filter((m) => m.correct).length, total: marked.length };
+  const correct = marked.filter((m) => m.correct).length + chosen.filter((m) => m.correct).length;
+  return { ok: true, marked, choices: chosen, correct, total: marked.length + chosen.length };
 }

@@ -79,6 +79,11 @@ const answerText = z.string().max(60, "Keep the answer to a number and a unit.")
 export const attemptSchema = z.object({
   lessonId: entityId,
   answers: z.record(z.string().regex(/^[a-z0-9-]{1,60}$/), answerText),
+  /** Question id → the chosen choice's id (a rating's id like "hitch.gtwRating", or an action word's id). */
+  choices: z
+    .record(z.string().regex(/^[a-z0-9-]{1,40}$/, "This example asks no such question."), z.string({ error: "Choose one of the answers." }).regex(/^[A-Za-z0-9.-]{1,80}$/, "That answer is not one of the choices for this question."))
+    .optional()
+    .default({}),
 });
 export type AttemptInput = z.output<typeof attemptSchema>;
 

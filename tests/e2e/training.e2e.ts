@@ -81,10 +81,25 @@ describe("training: author, publish, practise, see the result", () => {
     await second.getByLabel(/Your answer for/).fill("3");
     await second.getByRole("button", { name: "Check" }).click();
     await expect.poll(() => second.getByTestId("practice-mark").getAttribute("data-mark")).toBe("wrong");
-    await page.getByText("1 of 2 steps right.").waitFor();
+    // Then the choices, by keyboard: the ball mount's level allowance governs; more drop is the next step (a 4 in
+    // drop against the 6 in needed leaves the trailer nose-up).
+    const governs = page.getByRole("group", { name: /Which limit governs/ });
+    await governs.getByRole("radio", { name: /Off-level allowance at the coupler/ }).focus();
+    await page.keyboard.press("Space");
+    await page.getByTestId("practice-question-governs").getByRole("button", { name: "Check" }).click();
+    await expect.poll(() => page.getByTestId("practice-question-governs").getByTestId("practice-mark").getAttribute("data-mark")).toBe("right");
+    const next = page.getByRole("group", { name: /What is the next action/ });
+    await next.getByRole("radio", { name: "Tow as set up", exact: true }).check();
+    await page.getByTestId("practice-question-next-action").getByRole("button", { name: "Check" }).click();
+    await expect.poll(() => page.getByTestId("practice-question-next-action").getByTestId("practice-mark").getAttribute("data-mark")).toBe("wrong");
+    await page.getByTestId("practice-question-next-action").getByText(/the answer is “Choose a ball mount with more drop”/).waitFor();
+    await page.getByText("2 of 4 answers right.").waitFor();
     await page.getByRole("button", { name: "Record my result" }).click();
-    await page.getByText("Recorded: 1 of 2 steps right.").waitFor();
+    await page.getByText("Recorded: 2 of 4 answers right.").waitFor();
     await screenshot(page, "training-practice-desktop");
+    await page.setViewportSize({ width: 390, height: 844 });
+    await screenshot(page, "training-practice-phone");
+    await page.setViewportSize({ width: 1280, height: 900 });
   });
 
   it("the trainer sees the learner's result per example", async () => {
@@ -92,7 +107,7 @@ describe("training: author, publish, practise, see the result", () => {
     await page.goto("/training/results");
     const row = page.getByTestId("result-row").filter({ hasText: "A ball mount that rides level" });
     await row.waitFor();
-    await expect.poll(() => row.innerText()).toMatch(/Rowan Teague[\s\S]*1 \/ 2/);
+    await expect.poll(() => row.innerText()).toMatch(/Rowan Teague[\s\S]*2 \/ 4/);
     await screenshot(page, "training-results-desktop");
   });
 });

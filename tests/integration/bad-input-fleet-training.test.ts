@@ -25,7 +25,7 @@ import * as resultsRoute from "@/app/api/v1/training/results/route";
 import { getDb } from "@/db/client";
 import { vehicleProfiles } from "@/db/schema";
 import { newId } from "@/lib/server/tokens";
-import { copyLibraryExample, createCourse } from "@/lib/server/training";
+import { copyLibraryExample, createCourse, setLessonVisibility } from "@/lib/server/training";
 import { libraryExample } from "@/lib/training/library";
 import { OWNER_OF_A } from "./support/access-matrix";
 import { fromAction, fromResponse, initialFormState, runCorpus, type FieldSpec, type Target } from "./support/bad-input-harness";
@@ -138,8 +138,12 @@ const TARGETS: Target[] = [
     fields: [
       { path: "lessonId", kind: "entityId", required: true },
       { path: "answers", kind: "object", required: true },
+      { path: "choices", kind: "object" },
+      // A choice id that is not one of the question's choices (any corpus text) is refused on that question. The
+      // base's step answer names no step of the lesson, so every case is refused somewhere and nothing is kept.
+      { path: "choices.governs", kind: "enum" },
     ],
-    base: () => ({ lessonId, answers: { "front-change": "-275" } }),
+    base: () => ({ lessonId, answers: { "front-change": "-275" }, choices: { governs: "level.tolerance", "next-action": "more-drop" } }),
     call: (input) => fromAction(() => training.submitAttemptAction(input)),
   },
   {
@@ -322,6 +326,8 @@ beforeAll(async () => {
   const copied = await copyLibraryExample(OWNER_OF_A, "riding-level");
   if (!copied.ok) throw new Error(copied.message);
   lessonId = copied.id;
+  // Published, so a learner's attempt reaches the marking (a choice id is checked there against the lesson's own).
+  await setLessonVisibility(OWNER_OF_A, lessonId, "organisation");
   courseId = await createCourse(OWNER_OF_A, { title: "Corpus course", description: "" });
 });
 

@@ -54,6 +54,10 @@ const lessonForm = (extra: Record<string, string> = {}) =>
   form({ title: axles.title, story: axles.story, question: axles.question, rule: axles.rule, checkId: axles.checkId, rig: JSON.stringify(axles.rig), ...extra });
 
 const rightAnswers = { "front-change": "-275.86", "rear-change": "1,076", "front-hitched": "2824", "rear-hitched": "3675.9" };
+// Statics: rear 2,600 + 1,075.86 = 3,675.9 lb of the 4,000 lb rear GAWR (8.1 % left); front 3,100 − 275.86 = 2,824.1 lb
+// of 3,700 lb (23.7 % left). The rear GAWR governs; 8.1 % is under the organisation's 10 % threshold: tight, so
+// the rig tows as set up, with care.
+const rightChoices = { governs: "vehicle.gawrRear", "next-action": "tow-with-care" };
 
 let lessonA = "";
 let draftA = "";
@@ -137,19 +141,51 @@ describe("publishing by link", () => {
 describe("practice", () => {
   it("marks on the server, keeps the attempt, and shows it to the trainer per learner and example", async () => {
     await actAs("staffA");
-    const state = await submitAttemptAction({ lessonId: lessonA, answers: { ...rightAnswers, "rear-hitched": "3400" } });
-    expect(state).toMatchObject({ ok: true, correct: 3, total: 4 });
-    expect((await submitAttemptAction({ lessonId: lessonA, answers: rightAnswers })).correct).toBe(4);
+    const state = await submitAttemptAction({ lessonId: lessonA, answers: { ...rightAnswers, "rear-hitched": "3400" }, choices: rightChoices });
+    expect(state).toMatchObject({ ok: true, correct: 5, total: 6 });
+    expect((await submitAttemptAction({ lessonId: lessonA, answers: rightAnswers, choices: rightChoices })).correct).toBe(6);
     await actAs("trainerA");
     const body = (await (await resultsRoute(new Request("http://t/api/v1/training/results"))).json()) as { rows: Array<{ learner: string; attempts: number; bestCorrect: number; latestCorrect: number; total: number }> };
-    expect(body.rows).toEqual([expect.objectContaining({ learner: "staffA", attempts: 2, bestCorrect: 4, latestCorrect: 4, total: 4 })]);
+    expect(body.rows).toEqual([expect.objectContaining({ learner: "staffA", attempts: 2, bestCorrect: 6, latestCorrect: 6, total: 6 })]);
     expect((await resultsRoute(new Request("http://t/api/v1/training/results?lessonId=bad id"))).status).toBe(400);
+  });
+
+  it("marks the choices again on the server: a tampered right answer is marked wrong, and the choice is kept", async () => {
+    await actAs("staffA");
+    const db = await getDb();
+    const before = (await db.select().from(practiceAttempts)).length;
+    // The browser says the front GAWR governs and claims a full score; the server marks against the core.
+    const state = await submitAttemptAction({ lessonId: lessonA, answers: rightAnswers, choices: { ...rightChoices, governs: "vehicle.gawrFront" }, correct: 6, total: 6 });
+    expect(state).toMatchObject({ ok: true, correct: 5, total: 6 });
+    const rows = await db.select().from(practiceAttempts);
+    expect(rows).toHaveLength(before + 1);
+    const kept = rows.find((row) => row.correct === 5 && JSON.stringify(row.answers).includes("vehicle.gawrFront"))!;
+    expect(kept.answers).toEqual(
+      expect.arrayContaining([
+        { questionId: "governs", choiceId: "vehicle.gawrFront", correct: false },
+        { questionId: "next-action", choiceId: "tow-with-care", correct: true },
+      ]),
+    );
+  });
+
+  it("refuses an unknown choice id or an unanswered question with a clear field error, and keeps nothing", async () => {
+    await actAs("staffA");
+    const before = await trainingTables();
+    const unknown = await submitAttemptAction({ lessonId: lessonA, answers: rightAnswers, choices: { ...rightChoices, governs: "vehicle.madeUpRating" } });
+    expect(unknown).toMatchObject({ ok: false, fieldErrors: { "choices.governs": ["That answer is not one of the choices for this question."] } });
+    const unanswered = await submitAttemptAction({ lessonId: lessonA, answers: rightAnswers });
+    expect(unanswered.fieldErrors).toEqual({ "choices.governs": ["Choose one of the answers."], "choices.next-action": ["Choose one of the answers."] });
+    const stranger = await submitAttemptAction({ lessonId: lessonA, answers: rightAnswers, choices: { ...rightChoices, "which-colour": "red" } });
+    expect(stranger.fieldErrors).toEqual({ "choices.which-colour": ["This example asks no such question."] });
+    const garbled = await submitAttemptAction({ lessonId: lessonA, answers: rightAnswers, choices: { ...rightChoices, governs: "<b>1</b>" } });
+    expect(garbled.fieldErrors?.["choices.governs"]).toEqual(["That answer is not one of the choices for this question."]);
+    expect(await trainingTables()).toBe(before);
   });
 
   it("refuses an empty or unreadable answer per step and keeps nothing", async () => {
     await actAs("staffA");
     const before = await trainingTables();
-    const state = await submitAttemptAction({ lessonId: lessonA, answers: { ...rightAnswers, "front-change": "", "rear-change": "1075,86" } });
+    const state = await submitAttemptAction({ lessonId: lessonA, answers: { ...rightAnswers, "front-change": "", "rear-change": "1075,86" }, choices: rightChoices });
     expect(state.ok).toBe(false);
     expect(Object.keys(state.fieldErrors ?? {}).sort()).toEqual(["answers.front-change", "answers.rear-change"]);
     expect((await submitAttemptAction("not an object")).ok).toBe(false);

@@ -159,7 +159,7 @@ export async function moveCourseLessonAction(_previous: TrainingState, formData:
   return { ok: true, message: direction === "up" ? "Moved up." : "Moved down." };
 }
 
-/** Called by the practice screen with the answers as typed; the server marks them again before keeping them. */
+/** Called by the practice screen with the answers as typed and the choices made; the server marks them again before keeping them. */
 export async function submitAttemptAction(input: unknown): Promise<TrainingState> {
   const allowed = await authorize("training.practise");
   if (!allowed.ok) return { ok: false, message: allowed.message };
@@ -169,5 +169,5 @@ export async function submitAttemptAction(input: unknown): Promise<TrainingState
   if (!recorded.ok) return { ok: false, message: recorded.message, fieldErrors: recorded.fieldErrors };
   revalidatePath("/training");
   revalidatePath("/training/results");
-  return { ok: true, correct: recorded.correct, total: recorded.total, message: `Recorded: ${recorded.correct} of ${recorded.total} steps right.` };
+  return { ok: true, correct: recorded.correct, total: recorded.total, message: `Recorded: ${recorded.correct} of ${recorded.total} answers right.` };
 }

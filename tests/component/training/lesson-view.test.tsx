@@ -75,6 +75,6 @@ describe("practice", () => {
     expect(screen.getByText("Conclusion here")).toBeTruthy();
     fireEvent.click(screen.getByRole("button", { name: "Record my result" }));
     expect(await screen.findByText("Recorded: 4 of 4 steps right.")).toBeTruthy();
-    expect(submit).toHaveBeenCalledWith({ lessonId: "l1", answers: { "front-change": "-276", "rear-change": "1076", "front-hitched": "2824", "rear-hitched": "3676" } });
+    expect(submit).toHaveBeenCalledWith({ lessonId: "l1", answers: { "front-change": "-276", "rear-change": "1076", "front-hitched": "2824", "rear-hitched": "3676" }, choices: {} });
   });
 });

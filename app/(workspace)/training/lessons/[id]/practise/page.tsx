@@ -23,7 +23,7 @@ export default async function PractisePage({ params }: { params: Promise<{ id: s
       <PageHeader
         eyebrow={<Link href={`/training/lessons/${lesson.id}`} className="underline">{lesson.title}</Link>}
         title={`Practise: ${lesson.title}`}
-        description="Work out each step from the figures given, then check your answer. Give it in the step's unit or another one of the same kind; the step is shown once you have answered."
+        description="Work out each step from the figures given, then check your answer. Give it in the step's unit or another one of the same kind; the step is shown once you have answered. Then say which limit governs and what comes next."
       />
       <Card>
         <CardBody>
@@ -32,7 +32,7 @@ export default async function PractisePage({ params }: { params: Promise<{ id: s
       </Card>
       <Card>
         <CardBody>
-          <Practice lessonId={lesson.id} steps={prepared.steps} submit={submitAttemptAction} conclusion={<LessonConclusion lesson={prepared} />} />
+          <Practice lessonId={lesson.id} steps={prepared.steps} questions={prepared.questions} submit={submitAttemptAction} conclusion={<LessonConclusion lesson={prepared} />} />
         </CardBody>
       </Card>
       <Card>
