@@ -71,19 +71,27 @@ function ActualVsLimit({ check }: { check: AnyCheckResult }) {
   );
 }
 
+/**
+ * Every link with its rating, room and status. Where the panel is narrow (a phone's sheet) the rating and the room
+ * go under the link's name, so the status column keeps its place without a sideways scroll; a wider panel gives
+ * each its own column. Sized by the panel (a container query), not the screen: the desktop column is narrow too.
+ */
 function LinksTable({ check }: { check: WeakestLinkResult }) {
   if (!check.links.length) return null;
   const governing = new Set([check.governing?.id, check.governingGrossTrailerWeight?.id, check.governingTongueWeight?.id]);
+  const wide = "hidden @md:table-cell";
   return (
-    <div className="overflow-x-auto rounded-md border border-rule">
+    <div className="@container rounded-md border border-rule" data-testid="links-table">
       <table className="w-full border-collapse text-left text-[0.8125rem]">
         <caption className="sr-only">Every link between the vehicle and the trailer</caption>
         <thead className="bg-sunken text-ink-soft">
           <tr>
-            <th scope="col" className="px-2 py-1.5 font-semibold">Link</th>
-            <th scope="col" className="px-2 py-1.5 text-right font-semibold">Rating</th>
-            <th scope="col" className="px-2 py-1.5 text-right font-semibold">Room</th>
             <th scope="col" className="px-2 py-1.5 font-semibold">
+              Link<span className="font-normal @md:hidden">, rating, room</span>
+            </th>
+            <th scope="col" className={cn(wide, "px-2 py-1.5 text-right font-semibold")}>Rating</th>
+            <th scope="col" className={cn(wide, "px-2 py-1.5 text-right font-semibold")}>Room</th>
+            <th scope="col" className="w-px px-2 py-1.5 font-semibold whitespace-nowrap">
               <span className="sr-only">Status</span>
             </th>
           </tr>
@@ -93,14 +101,18 @@ function LinksTable({ check }: { check: WeakestLinkResult }) {
             const governs = link.id === check.governing?.id;
             return (
               <tr key={link.id} className={cn("align-top", governs && "bg-accent-soft/60")} data-governs={governs || undefined}>
-                <td className="px-2 py-1.5">
+                <td className="px-2 py-1.5 [overflow-wrap:anywhere]">
                   <span className={cn(governs && "font-semibold")}>{link.label}</span>
                   {governs ? <span className="ml-1 text-xs font-semibold text-accent-strong">· governs</span> : null}
                   {!governs && governing.has(link.id) ? <span className="ml-1 text-xs text-ink-soft">· lowest of its kind</span> : null}
+                  <span className="num mt-0.5 flex flex-wrap gap-x-2 text-ink-soft @md:hidden">
+                    <span className="whitespace-nowrap text-ink">{formatQuantity(link.rating)}</span>
+                    <span className="whitespace-nowrap">{link.margin ? `${formatMargin(link.margin)} room` : "room —"}</span>
+                  </span>
                 </td>
-                <td className="num px-2 py-1.5 text-right whitespace-nowrap">{formatQuantity(link.rating)}</td>
-                <td className="num px-2 py-1.5 text-right whitespace-nowrap">{formatMargin(link.margin)}</td>
-                <td className="px-2 py-1.5">
+                <td className={cn(wide, "num px-2 py-1.5 text-right whitespace-nowrap")}>{formatQuantity(link.rating)}</td>
+                <td className={cn(wide, "num px-2 py-1.5 text-right whitespace-nowrap")}>{formatMargin(link.margin)}</td>
+                <td className="w-px px-2 py-1.5 whitespace-nowrap">
                   <VerdictBadge status={link.status} size="sm" />
                 </td>
               </tr>
