@@ -5,7 +5,7 @@
  * stays light. Each one: a text title, an aria-label that says what it shows, direct labels instead of a
  * legend, limits as lines, weight axes from zero, a fixed height.
  */
-import { memo, type ReactNode } from "react";
+import { memo, useLayoutEffect, useRef, useState, type ReactNode } from "react";
 import {
   Area,
   Bar,
@@ -36,12 +36,33 @@ const SOFT = "var(--color-ink-soft)";
 const RULE = "var(--color-rule)";
 const TICK = { fill: SOFT, fontSize: 11 };
 
+/**
+ * True once the element has a width. A ResponsiveContainer in a parent with no size (the phone's verdict sheet
+ * while it is closed is display: none) measures 0 × 0 and warns on every redraw, that is on every keystroke: the
+ * chart is drawn only while its frame has a width, and drawn as soon as the sheet opens.
+ */
+function useHasWidth() {
+  const ref = useRef<HTMLDivElement>(null);
+  // Without ResizeObserver there is nothing to wait for: draw. With it, its first report (made for any frame with a
+  // size) draws the chart; a frame with no size is not reported until it gets one.
+  const [hasWidth, setHasWidth] = useState(() => typeof ResizeObserver === "undefined");
+  useLayoutEffect(() => {
+    const element = ref.current;
+    if (!element || typeof ResizeObserver === "undefined") return;
+    const observer = new ResizeObserver((entries) => setHasWidth((entries[0]?.contentRect.width ?? 0) > 0));
+    observer.observe(element);
+    return () => observer.disconnect();
+  }, []);
+  return [ref, hasWidth] as const;
+}
+
 function ChartFrame({ title, summary, height, children }: { title: string; summary: string; height: number; children: ReactNode }) {
+  const [ref, hasWidth] = useHasWidth();
   return (
     <figure className="min-w-0">
       <figcaption className="mb-1 text-[0.8125rem] font-semibold text-ink">{title}</figcaption>
-      <div role="img" aria-label={summary} style={{ height }} className="w-full">
-        {children}
+      <div ref={ref} role="img" aria-label={summary} style={{ height }} className="w-full min-w-0" data-drawn={hasWidth || undefined}>
+        {hasWidth ? children : null}
       </div>
     </figure>
   );
