@@ -72,7 +72,7 @@ describe("what is the next action", () => {
     expect(question("rack-that-scrapes", "next-action").answerId).toBe("more-rise");
     // tight: 400 lb of 5,000 lb left is 8 %, under the 10 % threshold → tow, with care
     expect(question("lowest-rating-governs", "next-action").answerId).toBe("tow-with-care");
-    // within: 750 lb measured against 800 lb is a mere report of the weighing → tow as set up
+    // within: the beam reads 250 × (12 + 24) ÷ 12 = 750 lb (statics, moments about the block); a weighing exceeds nothing → tow as set up
     expect(question("weighing-a-heavy-tongue", "next-action").answerId).toBe("tow-as-set-up");
     // incomplete: no trailer chosen yet, its weights and the ball's rating unknown → find the missing figures
     expect(question("how-heavy-a-trailer", "next-action").answerId).toBe("find-missing");
