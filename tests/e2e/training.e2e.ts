@@ -1,3 +1,4 @@
+import AxeBuilder from "@axe-core/playwright";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DESKTOP, openBrowser, PHONE, screenshot, signIn } from "./support/browser";
 
@@ -84,6 +85,10 @@ describe("training: author, publish, practise, see the result", () => {
     // Then the choices, by keyboard: the ball mount's level allowance governs; more drop is the next step (a 4 in
     // drop against the 6 in needed leaves the trailer nose-up).
     const governs = page.getByRole("group", { name: /Which limit governs/ });
+    await governs.waitFor();
+    // The radio groups as asked: no serious or critical axe finding (WCAG 2.x A and AA).
+    const audit = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"]).analyze();
+    expect(audit.violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`)).toEqual([]);
     await governs.getByRole("radio", { name: /Off-level allowance at the coupler/ }).focus();
     await page.keyboard.press("Space");
     await page.getByTestId("practice-question-governs").getByRole("button", { name: "Check" }).click();
