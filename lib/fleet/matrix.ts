@@ -3,10 +3,10 @@
  * into one rig and run through the core's `evaluateRigFast`. The data layer (lib/server/fleet.ts) and `npm run bench`
  * share it, so the bench measures what the server does per pair.
  */
-import { convertRig, evaluateRigFast } from "../towing/index";
+import { convertRig, evaluateRigFast, hitchAllowance } from "../towing/index";
 import type { RigInput } from "../towing/input";
 import type { CheckId, Governing, Margin, VerdictLevel } from "../towing/types";
-import type { UnitSystem } from "../towing/units";
+import type { UnitString, UnitSystem } from "../towing/units";
 
 export interface MatrixCell {
   level: VerdictLevel;
@@ -40,4 +40,45 @@ export function evaluatePair(units: UnitSystem, vehicle: Partial<RigInput>, hitc
     governing: governing ? { label: governing.label, value: governing.value, unit: governing.unit, checkId: governing.checkId } : undefined,
     margin,
   };
+}
+
+/**
+ * The most a vehicle may pull as its profile stands: the core's lowest gross trailer weight rating of the
+ * vehicle and its hitch, weight-carrying (`hitchAllowance`), with the rating that sets it and the ones not on
+ * record. A trailer's ball, coupler, chains, ball mount or weight distribution may lower it for a given pair;
+ * the pair's own verdict says so. Undefined when neither the vehicle's nor the hitch's figure is on record.
+ */
+export interface VehicleCapacity {
+  value: number;
+  unit: UnitString;
+  /** The core's words for the governing rating ("Vehicle tow rating", "Hitch label"). */
+  setBy: string;
+  /** The core's words for the vehicle's or hitch's rating that is not on record, so the figure may be lower. */
+  missing: string[];
+}
+
+export function vehicleCapacity(units: UnitSystem, part: Partial<RigInput>): VehicleCapacity | undefined {
+  const allowance = hitchAllowance({ units, vehicle: { ...part.vehicle }, hitch: { ...part.hitch } });
+  const limit = allowance.weightCarrying.grossTrailerWeight;
+  if (!limit.governing) return undefined;
+  return { value: limit.governing.value, unit: limit.governing.unit, setBy: limit.governing.label, missing: limit.missing.map((m) => m.label) };
+}
+
+/**
+ * What a trailer or accessory puts behind the vehicle, as its profile records it: a trailer's gross trailer
+ * weight, an accessory's own weight with its load (the weight the core puts on the receiver). Undefined when
+ * the profile lacks the figure (an accessory needs both).
+ */
+export interface HitchedWeight {
+  value: number;
+  unit: UnitString;
+  basis: "gross" | "loaded";
+}
+
+export function hitchedWeight(units: UnitSystem, part: Partial<RigInput>): HitchedWeight | undefined {
+  const unit: UnitString = units === "metric" ? "kg" : "lb";
+  if (part.trailer) return part.trailer.grossTrailerWeight === undefined ? undefined : { value: part.trailer.grossTrailerWeight, unit, basis: "gross" };
+  const a = part.accessory;
+  if (!a || a.weight === undefined || a.loadWeight === undefined) return undefined;
+  return { value: a.weight + a.loadWeight, unit, basis: "loaded" };
 }

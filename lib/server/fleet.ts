@@ -5,11 +5,11 @@ import { accessoryProfiles, savedChecks, trailerProfiles, vehicleProfiles } from
 import { exportFleetCsv, parseFleetCsv, type ParsedImport, type UnitsChoice } from "@/lib/fleet/csv";
 import { KIND_WORDS, SECTIONS_BY_KIND, type ProfileKind } from "@/lib/fleet/fields";
 import { can, type Permission } from "@/lib/roles";
-import { evaluatePair, profilePart, type MatrixCell } from "@/lib/fleet/matrix";
+import { evaluatePair, hitchedWeight, profilePart, vehicleCapacity, type HitchedWeight, type MatrixCell, type VehicleCapacity } from "@/lib/fleet/matrix";
 import type { RigInput } from "@/lib/towing/input";
 import type { VerdictLevel } from "@/lib/towing/types";
 import type { UnitSystem } from "@/lib/towing/units";
-import type { ImportOptions, MatrixQuery, ProfileInput } from "@/lib/validation/fleet";
+import type { ImportOptions, MatrixHitchedSort, MatrixQuery, MatrixVehicleSort, ProfileInput } from "@/lib/validation/fleet";
 import type { AccessContext } from "./access";
 import { figureSourcesByVehicle } from "./installations";
 import { AccessDenied } from "./access-denied";
@@ -201,19 +201,32 @@ export async function savedChecksOfVehicle(access: AccessContext, profile: Fleet
 
 // ---------------------------------------------------------------------------------------------- matrix
 
-export type { MatrixCell };
+export type { HitchedWeight, MatrixCell, VehicleCapacity };
 
 export interface MatrixColumn {
   id: string;
   kind: "trailers" | "accessories";
   name: string;
+  /** The trailer's gross weight or the accessory's loaded weight, in the organisation's units; absent when not on record. */
+  weight?: HitchedWeight;
+}
+
+export interface MatrixRow {
+  id: string;
+  name: string;
+  /** The date of the installation record the vehicle's hitch figures were measured by, if any. */
+  measuredOn?: string;
+  /** The most it may pull by its own and its hitch's ratings, in the organisation's units; absent when neither is on record. */
+  capacity?: VehicleCapacity;
+  cells: Array<MatrixCell | null>;
 }
 
 export interface MatrixPage {
   units: UnitSystem;
-  /** `measuredOn`: the date of the installation record the vehicle's hitch figures were measured by, if any. */
-  rows: Array<{ id: string; name: string; measuredOn?: string; cells: Array<MatrixCell | null> }>;
+  rows: MatrixRow[];
   columns: MatrixColumn[];
+  vehicleSort: MatrixVehicleSort;
+  hitchedSort: MatrixHitchedSort;
   page: number;
   pageCount: number;
   totalRows: number;
@@ -227,7 +240,7 @@ export interface MatrixPage {
 }
 
 interface Prepared {
-  vehicles: Array<{ id: string; name: string; part: Partial<RigInput> }>;
+  vehicles: Array<{ id: string; name: string; capacity?: VehicleCapacity; part: Partial<RigInput> }>;
   hitched: Array<MatrixColumn & { part: Partial<RigInput> }>;
 }
 
@@ -238,6 +251,8 @@ interface MatrixCacheEntry {
   cells?: MatrixCell[];
   /** The full evaluation under way, shared by every request that needs it. */
   computing?: Promise<MatrixCell[]>;
+  /** Row and column indexes in each order asked for so far. */
+  orders: Map<string, number[]>;
 }
 
 const matrixCache = new Map<string, MatrixCacheEntry>();
@@ -257,15 +272,21 @@ async function prepareMatrix(access: AccessContext): Promise<MatrixCacheEntry> {
   const key = access.organisation.id;
   const cached = matrixCache.get(key);
   if (cached && cached.fingerprint === fingerprint) return cached;
+  const vehicle = (p: FleetProfile) => {
+    const part = partOf(p, units);
+    return { id: p.id, name: p.name, capacity: vehicleCapacity(units, part), part };
+  };
+  const hitchedOf = (kind: MatrixColumn["kind"]) => (p: FleetProfile) => {
+    const part = partOf(p, units);
+    return { id: p.id, kind, name: p.name, weight: hitchedWeight(units, part), part };
+  };
   const entry: MatrixCacheEntry = {
     fingerprint,
     prepared: {
-      vehicles: vehicles.map((p) => ({ id: p.id, name: p.name, part: partOf(p, units) })),
-      hitched: [
-        ...trailers.map((p) => ({ id: p.id, kind: "trailers" as const, name: p.name, part: partOf(p, units) })),
-        ...accessories.map((p) => ({ id: p.id, kind: "accessories" as const, name: p.name, part: partOf(p, units) })),
-      ],
+      vehicles: vehicles.map(vehicle),
+      hitched: [...trailers.map(hitchedOf("trailers")), ...accessories.map(hitchedOf("accessories"))],
     },
+    orders: new Map(),
   };
   matrixCache.set(key, entry);
   // A handful of organisations at most stay in memory.
@@ -292,16 +313,45 @@ function evaluateAll(entry: MatrixCacheEntry, units: UnitSystem, ratio: number, 
   return entry.computing;
 }
 
+/**
+ * Indexes in the order asked for. "name" keeps the lists' own order (vehicles A to Z; trailers A to Z, then
+ * accessories A to Z). By a figure, a profile without one comes last either way, and equal figures keep the
+ * name order. Kept per cache entry: a profile's change starts a new entry.
+ */
+function orderOf(entry: MatrixCacheEntry, axis: "rows" | "columns", sort: MatrixVehicleSort | MatrixHitchedSort): number[] {
+  const key = `${axis}:${sort}`;
+  const known = entry.orders.get(key);
+  if (known) return known;
+  const figures = axis === "rows" ? entry.prepared.vehicles.map((v) => v.capacity?.value) : entry.prepared.hitched.map((h) => h.weight?.value);
+  const indexes = figures.map((_, i) => i);
+  if (sort !== "name") {
+    const sign = sort.endsWith("-desc") ? -1 : 1;
+    indexes.sort((a, b) => {
+      const x = figures[a];
+      const y = figures[b];
+      if (x === undefined || y === undefined) return x === y ? a - b : x === undefined ? 1 : -1;
+      return x === y ? a - b : sign * (x - y);
+    });
+  }
+  entry.orders.set(key, indexes);
+  return indexes;
+}
+
 /** Above this many pairs, an unfiltered page evaluates only its own cells (the rest on demand). */
 const FULL_EVALUATION_LIMIT = 20_000;
 
 /**
  * Every vehicle against every trailer and accessory, with the core's `evaluateRigFast`. Filters by name and by
- * verdict; pages over vehicles (rows) and over trailers and accessories (columns). A verdict filter needs
- * every pair: the full result is kept per organisation until a profile changes.
+ * verdict; sorts vehicles by name or capacity and trailers and accessories by name or weight, then pages over
+ * vehicles (rows) and over trailers and accessories (columns), so an order holds across pages. A verdict
+ * filter needs every pair: the full result is kept per organisation until a profile changes.
  */
-export async function fleetMatrix(access: AccessContext, query: MatrixQuery): Promise<MatrixPage> {
+export async function fleetMatrix(
+  access: AccessContext,
+  asked: Omit<MatrixQuery, "vehicleSort" | "hitchedSort"> & Partial<Pick<MatrixQuery, "vehicleSort" | "hitchedSort">>,
+): Promise<MatrixPage> {
   assertCan(access, "fleet.read");
+  const query: MatrixQuery = { ...asked, vehicleSort: asked.vehicleSort ?? "name", hitchedSort: asked.hitchedSort ?? "name" };
   const started = performance.now();
   const entry = await prepareMatrix(access);
   const { vehicles, hitched } = entry.prepared;
@@ -312,8 +362,8 @@ export async function fleetMatrix(access: AccessContext, query: MatrixQuery): Pr
   const needle = (text: string | undefined) => text?.toLowerCase() ?? "";
   const vehicleNeedle = needle(query.vehicle);
   const hitchedNeedle = needle(query.hitched);
-  let rowIndexes = vehicles.map((_, i) => i).filter((i) => !vehicleNeedle || vehicles[i]!.name.toLowerCase().includes(vehicleNeedle));
-  let colIndexes = hitched.map((_, i) => i).filter((i) => !hitchedNeedle || hitched[i]!.name.toLowerCase().includes(hitchedNeedle));
+  let rowIndexes = orderOf(entry, "rows", query.vehicleSort).filter((i) => !vehicleNeedle || vehicles[i]!.name.toLowerCase().includes(vehicleNeedle));
+  let colIndexes = orderOf(entry, "columns", query.hitchedSort).filter((i) => !hitchedNeedle || hitched[i]!.name.toLowerCase().includes(hitchedNeedle));
 
   let evaluated = 0;
   const full = Boolean(entry.cells) || Boolean(query.level) || vehicles.length * width <= FULL_EVALUATION_LIMIT;
@@ -353,13 +403,14 @@ export async function fleetMatrix(access: AccessContext, query: MatrixQuery): Pr
   const pageRows = rowIndexes.slice((page - 1) * query.pageSize, page * query.pageSize);
   const pageCols = colIndexes.slice((colPage - 1) * query.colPageSize, colPage * query.colPageSize);
 
-  const rows = pageRows.map((r) => ({
+  const rows: MatrixRow[] = pageRows.map((r) => ({
     id: vehicles[r]!.id,
     name: vehicles[r]!.name,
+    ...(vehicles[r]!.capacity ? { capacity: vehicles[r]!.capacity } : {}),
     cells: pageCols.map((c) => {
       let cell = entry.cells?.[r * width + c];
       if (!cell) {
-        cell = evaluatePair(units, vehicles[r]!.part, hitched[c]!.part, ratio);
+        cell = evaluatePair(units, vehicles[r]!.part, hitched[c]!.part, ratio, frontLoss);
         evaluated++;
       }
       return query.level && cell.level !== query.level ? null : cell;
@@ -373,7 +424,12 @@ export async function fleetMatrix(access: AccessContext, query: MatrixQuery): Pr
   return {
     units,
     rows,
-    columns: pageCols.map((c) => ({ id: hitched[c]!.id, kind: hitched[c]!.kind, name: hitched[c]!.name })),
+    columns: pageCols.map((c) => {
+      const { id, kind, name, weight } = hitched[c]!;
+      return weight ? { id, kind, name, weight } : { id, kind, name };
+    }),
+    vehicleSort: query.vehicleSort,
+    hitchedSort: query.hitchedSort,
     page,
     pageCount,
     totalRows: rowIndexes.length,

@@ -108,6 +108,12 @@ export const listProfilesQuerySchema = z.object({
 });
 
 export const MATRIX_LEVELS = VERDICT_LEVELS;
+/** Rows: by name, or by the most the vehicle may pull (its lowest tow rating). */
+export const MATRIX_VEHICLE_SORTS = ["name", "capacity-desc", "capacity-asc"] as const;
+/** Columns: by name (trailers, then accessories), or by the trailer's gross weight or the accessory's loaded weight. */
+export const MATRIX_HITCHED_SORTS = ["name", "weight-desc", "weight-asc"] as const;
+export type MatrixVehicleSort = (typeof MATRIX_VEHICLE_SORTS)[number];
+export type MatrixHitchedSort = (typeof MATRIX_HITCHED_SORTS)[number];
 
 export const matrixQuerySchema = z.object({
   vehicle: z.string().trim().max(120).optional(),
@@ -117,6 +123,15 @@ export const matrixQuerySchema = z.object({
   pageSize: z.coerce.number({ error: "Page size: a whole number." }).int().min(5).max(100).default(25),
   colPage: z.coerce.number({ error: "Column page: a whole number." }).int().min(1).max(10_000).default(1),
   colPageSize: z.coerce.number({ error: "Column page size: a whole number." }).int().min(4).max(60).default(10),
+  // The order is kept across pages: the server sorts before it pages. Left out or empty, by name.
+  vehicleSort: z.preprocess(
+    (value) => (value === "" ? undefined : value),
+    z.enum(MATRIX_VEHICLE_SORTS, { error: "Order of the vehicles: name, capacity-desc (largest first) or capacity-asc (smallest first)." }).default("name"),
+  ),
+  hitchedSort: z.preprocess(
+    (value) => (value === "" ? undefined : value),
+    z.enum(MATRIX_HITCHED_SORTS, { error: "Order of the trailers and accessories: name, weight-desc (heaviest first) or weight-asc (lightest first)." }).default("name"),
+  ),
 });
 export type MatrixQuery = z.output<typeof matrixQuerySchema>;
 

@@ -225,6 +225,7 @@ const ENTRIES: Entry[] = [
   { name: "GET /api/v1/fleet/[kind]/export", rule: "fleet.read", scope: "organisation", completes: true, run: async () => fleetExportRoute.GET(request("/api/v1/fleet/vehicles/export"), params({ kind: "vehicles" })) },
   { name: "GET /api/v1/fleet/[kind]/template", rule: "fleet.read", scope: "none", completes: true, run: async () => fleetTemplateRoute.GET(request("/"), params({ kind: "vehicles" })) },
   { name: "GET /api/v1/fleet/matrix", rule: "fleet.read", scope: "organisation", completes: true, run: async () => fleetMatrixRoute.GET(request("/api/v1/fleet/matrix")) },
+  { name: "GET /api/v1/fleet/matrix (sorted)", rule: "fleet.read", scope: "organisation", completes: true, run: async () => fleetMatrixRoute.GET(request("/api/v1/fleet/matrix?vehicleSort=capacity-desc&hitchedSort=weight-desc")) },
   {
     name: "POST /api/v1/fleet/import (preview)",
     rule: "fleet.read",

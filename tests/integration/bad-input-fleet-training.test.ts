@@ -268,8 +268,11 @@ const TARGETS: Target[] = [
       { path: "page", kind: "formNumber" },
       { path: "pageSize", kind: "formNumber" },
       { path: "colPage", kind: "formNumber" },
+      // Empty means by name, as left out; any other unknown order is a field error.
+      { path: "vehicleSort", kind: "enum", accepts: ["empty string"] },
+      { path: "hitchedSort", kind: "enum", accepts: ["empty string"] },
     ],
-    base: () => ({ level: "over", page: "1", pageSize: "25", colPage: "1" }),
+    base: () => ({ level: "over", page: "1", pageSize: "25", colPage: "1", vehicleSort: "capacity-desc", hitchedSort: "weight-desc" }),
     call: async (query) => fromResponse(await fleetMatrixRoute.GET(request(`/api/v1/fleet/matrix?${query as string}`))),
     skipBodies: true,
   },

@@ -362,3 +362,121 @@ describe("the pairing matrix at 500 × 200", () => {
     for (const row of cached.body.rows) expect(row.cells.every((cell) => cell === null || cell.level === "within")).toBe(true);
   });
 });
+
+describe("the pairing matrix's order", () => {
+  // Correctness only. Invented profiles of A, named so the name filters keep them apart from the rest of A's fleet.
+  const truck = (id: string, name: string, vehicle: Record<string, number>, hitch: Record<string, number>, units: "imperial" | "metric" = "imperial") => ({
+    id,
+    organisationId: "org-a",
+    name,
+    units,
+    data: { units, vehicle: { gvwr: units === "metric" ? 4000 : 9000, ...vehicle }, hitch },
+  });
+  const trailer = (id: string, name: string, trailerPart: Record<string, unknown>, units: "imperial" | "metric" = "imperial") => ({
+    id,
+    organisationId: "org-a",
+    name,
+    units,
+    data: { units, trailer: { type: "utility", ...trailerPart } },
+  });
+  type Page = {
+    totalRows: number;
+    totalColumns: number;
+    vehicleSort: string;
+    hitchedSort: string;
+    rows: Array<{ name: string; capacity?: { value: number; unit: string; setBy: string; missing: string[] }; cells: unknown[] }>;
+    columns: Array<{ name: string; kind: string; weight?: { value: number; unit: string; basis: string } }>;
+  };
+  const get = async (query: string) => {
+    const response = await matrixRoute(new Request(`http://t/api/v1/fleet/matrix?vehicle=Sort%20truck&hitched=Sort%20load&pageSize=5&colPageSize=4&${query}`));
+    expect(response.status).toBe(200);
+    return (await response.json()) as Page;
+  };
+  const letters = (names: string[]) => names.map((name) => name.split(" ").at(-1)).join("");
+
+  beforeAll(async () => {
+    const db = await getDb();
+    await db.insert(vehicleProfiles).values([
+      truck("sv-a", "Sort truck A", { towRating: 7000 }, { gtwRating: 6000 }),
+      truck("sv-b", "Sort truck B", { towRating: 12000 }, { gtwRating: 14000 }),
+      truck("sv-c", "Sort truck C", { towRating: 9000 }, {}),
+      truck("sv-d", "Sort truck D", {}, {}),
+      truck("sv-e", "Sort truck E", { towRating: 3000 }, { gtwRating: 3500 }, "metric"),
+      truck("sv-f", "Sort truck F", { towRating: 10000 }, { gtwRating: 10000 }),
+    ]);
+    await db.insert(trailerProfiles).values([
+      trailer("st-p", "Sort load trailer P", { grossTrailerWeight: 5200, tongueWeight: 600 }),
+      trailer("st-q", "Sort load trailer Q", { grossTrailerWeight: 9800, tongueWeight: 1100 }),
+      trailer("st-r", "Sort load trailer R", { grossTrailerWeight: 2000, tongueWeight: 240 }, "metric"),
+      trailer("st-s", "Sort load trailer S", { tongueWeight: 300 }),
+    ]);
+    await db.insert(accessoryProfiles).values([
+      { id: "sa-t", organisationId: "org-a", name: "Sort load rack T", units: "imperial", data: { units: "imperial", accessory: { type: "cargo-carrier", weight: 60, loadWeight: 250 } } },
+      { id: "sa-u", organisationId: "org-a", name: "Sort load rack U", units: "imperial", data: { units: "imperial", accessory: { type: "cargo-carrier", weight: 50 } } },
+    ]);
+  });
+
+  it("sorts vehicles by the lowest of their tow and hitch ratings, before paging, a vehicle without one last", async () => {
+    await actAs("fleetA");
+    // Each capacity is min(vehicle tow rating, hitch label), worked by hand from the invented figures above:
+    // B min(12000, 14000) = 12000; F min(10000, 10000) = 10000 (the vehicle's named first when equal);
+    // C 9000 (no hitch label); E min(3000 kg, 3500 kg) = 3000 kg = 3000 / 0.45359237 = 6613.868 lb
+    // (Source: NIST SP 811, 1 lb = 0.45359237 kg exactly); A min(7000, 6000) = 6000; D none on record.
+    const desc = await get("vehicleSort=capacity-desc");
+    expect(desc.vehicleSort).toBe("capacity-desc");
+    expect(desc.totalRows).toBe(6);
+    expect(letters(desc.rows.map((row) => row.name))).toBe("BFCEA");
+    expect(letters((await get("vehicleSort=capacity-desc&page=2")).rows.map((row) => row.name))).toBe("D");
+    expect(letters((await get("vehicleSort=capacity-asc")).rows.map((row) => row.name))).toBe("AECFB");
+    expect(letters((await get("vehicleSort=capacity-asc&page=2")).rows.map((row) => row.name))).toBe("D");
+    expect(letters((await get("vehicleSort=name")).rows.map((row) => row.name))).toBe("ABCDE");
+
+    const byName = Object.fromEntries(desc.rows.map((row) => [row.name.at(-1), row.capacity]));
+    expect(byName.B).toEqual({ value: 12000, unit: "lb", setBy: "Vehicle tow rating", missing: [] });
+    expect(byName.A).toEqual({ value: 6000, unit: "lb", setBy: "Hitch label", missing: [] });
+    expect(byName.C).toEqual({ value: 9000, unit: "lb", setBy: "Vehicle tow rating", missing: ["Hitch label"] });
+    expect(byName.E!.value).toBeCloseTo(6613.868, 2);
+    expect(byName.E!.unit).toBe("lb");
+    expect((await get("vehicleSort=capacity-desc&page=2")).rows[0]!.capacity).toBeUndefined();
+  });
+
+  it("sorts trailers and accessories by gross or loaded weight, before paging, one without a weight last", async () => {
+    await actAs("fleetA");
+    // Weights worked by hand: Q 9800 lb, P 5200 lb, R 2000 kg = 2000 / 0.45359237 = 4409.245 lb (Source: NIST
+    // SP 811), rack T 60 + 250 = 310 lb loaded; trailer S has no gross weight, rack U no load: both last, trailers first.
+    const desc = await get("hitchedSort=weight-desc");
+    expect(desc.totalColumns).toBe(6);
+    expect(letters(desc.columns.map((column) => column.name))).toBe("QPRT");
+    expect(desc.rows[0]!.cells).toHaveLength(4);
+    expect(letters((await get("hitchedSort=weight-desc&colPage=2")).columns.map((column) => column.name))).toBe("SU");
+    expect(letters((await get("hitchedSort=weight-asc")).columns.map((column) => column.name))).toBe("TRPQ");
+    expect(letters((await get("hitchedSort=weight-asc&colPage=2")).columns.map((column) => column.name))).toBe("SU");
+    expect(letters((await get("hitchedSort=name")).columns.map((column) => column.name))).toBe("PQRS");
+    expect(desc.columns[0]!.weight).toEqual({ value: 9800, unit: "lb", basis: "gross" });
+    expect(desc.columns[2]!.weight!.value).toBeCloseTo(4409.245, 2);
+    expect(desc.columns[3]!.weight).toEqual({ value: 310, unit: "lb", basis: "loaded" });
+    expect((await get("hitchedSort=weight-desc&colPage=2")).columns.every((column) => column.weight === undefined)).toBe(true);
+  });
+
+  it("keeps the verdict filter with an order, and both orders together", async () => {
+    await actAs("fleetA");
+    const both = await get("vehicleSort=capacity-desc&hitchedSort=weight-desc");
+    expect(both.rows[0]!.name).toBe("Sort truck B");
+    expect(both.columns[0]!.name).toBe("Sort load trailer Q");
+    const over = await get("level=over&vehicleSort=capacity-asc&hitchedSort=weight-desc");
+    for (const row of over.rows) expect(row.cells.every((cell) => cell === null || (cell as { level: string }).level === "over")).toBe(true);
+    const capacities = over.rows.map((row) => row.capacity?.value ?? Infinity);
+    expect(capacities).toEqual([...capacities].sort((a, b) => a - b));
+  });
+
+  it("an unknown order is a field error naming it; an empty one is by name", async () => {
+    await actAs("fleetA");
+    const bad = await matrixRoute(new Request("http://t/api/v1/fleet/matrix?vehicleSort=heaviest&hitchedSort=1"));
+    expect(bad.status).toBe(400);
+    const { fieldErrors } = (await bad.json()) as { fieldErrors: Record<string, string[]> };
+    expect(Object.keys(fieldErrors).sort()).toEqual(["hitchedSort", "vehicleSort"]);
+    expect(fieldErrors.vehicleSort![0]).toMatch(/^Order of the vehicles/);
+    const empty = await get("vehicleSort=&hitchedSort=");
+    expect([empty.vehicleSort, empty.hitchedSort]).toEqual(["name", "name"]);
+  });
+});

@@ -6,7 +6,11 @@ import { fieldErrorsFrom } from "@/lib/validation/form-state";
 
 export const dynamic = "force-dynamic";
 
-/** Which vehicle may pull which trailer: ?vehicle=&hitched=&level=&page=&pageSize=&colPage=&colPageSize= */
+/**
+ * Which vehicle may pull which trailer: ?vehicle=&hitched=&level=&page=&pageSize=&colPage=&colPageSize=
+ * &vehicleSort=name|capacity-desc|capacity-asc&hitchedSort=name|weight-desc|weight-asc (left out: by name).
+ * An unknown value is a 400 naming the field.
+ */
 export async function GET(request: Request) {
   const allowed = await authorize("fleet.read");
   if (!allowed.ok) return refusal(allowed);
