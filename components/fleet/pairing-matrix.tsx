@@ -1,25 +1,59 @@
 "use client";
 import Link from "next/link";
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import useSWR from "swr";
-import { Button, Card, CardBody, Field, TextInput, VerdictBadge, cn, levelWords } from "@/components/ui";
+import { Button, Card, CardBody, Field, Select, TextInput, VerdictBadge, cn, levelWords } from "@/components/ui";
 import { fetchJson } from "@/lib/client/fetcher";
-import { fleetMatrixKey } from "@/lib/fleet/keys";
+import { MATRIX_COL_PAGE_SIZE as COL_PAGE_SIZE, MATRIX_PAGE_SIZE as PAGE_SIZE, fleetMatrixKey } from "@/lib/fleet/keys";
 import { formatNumber } from "@/lib/format";
-import type { MatrixCell, MatrixColumn, MatrixPage } from "@/lib/server/fleet";
+import type { MatrixCell, MatrixColumn, MatrixPage, MatrixRow } from "@/lib/server/fleet";
+import type { MatrixHitchedSort, MatrixVehicleSort } from "@/lib/validation/fleet";
 import { VerdictFilter } from "@/components/verdict-filter";
+
+export interface PairingMatrixFilters {
+  vehicle: string;
+  hitched: string;
+  level: string;
+  vehicleSort: string;
+  hitchedSort: string;
+}
 
 export interface PairingMatrixProps {
   initial: MatrixPage;
   initialKey: string;
-  initialFilters: { vehicle: string; hitched: string; level: string };
+  initialFilters: PairingMatrixFilters;
   cautions: readonly string[];
 }
 
-const PAGE_SIZE = 25;
-const COL_PAGE_SIZE = 8;
+const VEHICLE_ORDERS: Array<[MatrixVehicleSort, string]> = [
+  ["name", "Name, A to Z"],
+  ["capacity-desc", "Most it may pull, largest first"],
+  ["capacity-asc", "Most it may pull, smallest first"],
+];
+const HITCHED_ORDERS: Array<[MatrixHitchedSort, string]> = [
+  ["name", "Name, trailers then accessories"],
+  ["weight-desc", "Weight, heaviest first"],
+  ["weight-asc", "Weight, lightest first"],
+];
+
+/** The header's aria-sort for an order: by name reads A to Z, so ascending. */
+function ariaSort(sort: string, byName: boolean): "ascending" | "descending" | "none" {
+  if (sort === "name") return byName ? "ascending" : "none";
+  return sort.endsWith("-desc") ? "descending" : "ascending";
+}
+
+/** The page's own address with the filters and the order, so a reload or a shared link shows the same grid. */
+function addressOf(filters: PairingMatrixFilters): string {
+  const search = new URLSearchParams();
+  for (const [name, value] of Object.entries(filters)) if (value && !(name.endsWith("Sort") && value === "name")) search.set(name, value);
+  const query = search.toString();
+  return `${window.location.pathname}${query ? `?${query}` : ""}`;
+}
 
 /** The set-up each check asks to adjust, in a few words for a cell. */
+/** The vehicles' column: held at the left edge, narrow on a phone, with a rule on its right edge (a shadow: a collapsed border would scroll away). */
+const STICKY = "sticky left-0 w-32 min-w-32 max-w-32 shadow-[inset_-1px_0_0_var(--color-rule)] sm:w-48 sm:min-w-48 sm:max-w-48";
+
 const SETUP_WORDS: Partial<Record<string, string>> = {
   "ball-mount": "ball mount drop",
   "weight-distribution": "weight distribution",
@@ -71,9 +105,49 @@ function CellLink({ vehicle, column, cell }: { vehicle: { id: string; name: stri
   );
 }
 
+/** The vehicle's name, then the most it may pull and the rating that sets it (the core's figure, from the server). */
+function VehicleHeader({ row }: { row: MatrixRow }) {
+  const capacity = row.capacity;
+  return (
+    <>
+      <Link href={`/fleet/vehicles/${row.id}`} className="underline decoration-rule">
+        {row.name}
+      </Link>
+      {capacity ? (
+        <span className="mt-0.5 block text-xs font-normal text-ink-soft" data-testid="vehicle-capacity">
+          pulls up to{" "}
+          <span className="num font-semibold whitespace-nowrap text-ink">
+            {formatNumber(capacity.value, capacity.unit)} {capacity.unit}
+          </span>
+          <span className="block">by the {capacity.setBy.toLowerCase()}</span>
+          {capacity.missing.length ? <span className="block">{capacity.missing.map((m) => m.toLowerCase()).join(" and ")} not on record: may be lower</span> : null}
+        </span>
+      ) : (
+        <span className="mt-0.5 block text-xs font-normal text-ink-soft">no tow rating on record</span>
+      )}
+      {row.measuredOn ? <span className="block text-xs font-normal text-ink-soft">hitch measured {row.measuredOn}</span> : null}
+    </>
+  );
+}
+
+/** A trailer's gross weight or an accessory's loaded weight, as its profile records it. */
+function WeightHeader({ column }: { column: MatrixColumn }) {
+  const weight = column.weight;
+  if (!weight) return <span className="font-normal text-ink-soft">weight not on record</span>;
+  return (
+    <>
+      <span className="num whitespace-nowrap">
+        {formatNumber(weight.value, weight.unit)} {weight.unit}
+      </span>{" "}
+      <span className="font-normal text-ink-soft">{weight.basis === "gross" ? "gross" : "loaded"}</span>
+    </>
+  );
+}
+
 /**
  * Every vehicle against every trailer and accessory. Pages over both axes so 500 × 200 stays a screenful;
- * the grid scrolls inside its own box on a phone.
+ * the server sorts before it pages, so an order holds across pages. The grid scrolls sideways inside its own
+ * box with the vehicles' column held in place.
  */
 export function PairingMatrix({ initial, initialKey, initialFilters, cautions }: PairingMatrixProps) {
   const [filters, setFilters] = useState(initialFilters);
@@ -82,23 +156,63 @@ export function PairingMatrix({ initial, initialKey, initialFilters, cautions }:
   const key = fleetMatrixKey({ ...filters, page, pageSize: PAGE_SIZE, colPage, colPageSize: COL_PAGE_SIZE });
   const { data, error, isLoading } = useSWR(key, fetchJson<MatrixPage>, { fallback: { [initialKey]: initial }, keepPreviousData: true });
 
-  const setFilter = (name: keyof typeof filters, value: string) => {
+  const setFilter = (name: keyof typeof filters, value: string) => setFilterSet({ [name]: value });
+  const setFilterSet = (values: Partial<PairingMatrixFilters>) => {
     setPage(1);
     setColPage(1);
-    setFilters((current) => ({ ...current, [name]: value }));
+    setFilters((current) => ({ ...current, ...values }));
   };
+  // The address follows the filters and the order, as the page reads them on a reload.
+  useEffect(() => {
+    const address = addressOf(filters);
+    if (address !== `${window.location.pathname}${window.location.search}`) window.history.replaceState(window.history.state, "", address);
+  }, [filters]);
+  const vehicleAria = ariaSort(filters.vehicleSort, true);
+  const weightAria = ariaSort(filters.hitchedSort, false);
+  const strongestFirst = filters.vehicleSort === "capacity-desc" && filters.hitchedSort === "weight-desc";
 
   return (
     <div className="flex flex-col gap-4">
       <Card>
-        <form className="grid gap-4 p-4 sm:grid-cols-3" role="search" aria-label="Filter pairings" onSubmit={(e) => e.preventDefault()}>
-          <Field label="Vehicle">
+        <form className="grid gap-4 p-4 sm:grid-cols-2 lg:grid-cols-6" role="search" aria-label="Filter and sort pairings" onSubmit={(e) => e.preventDefault()}>
+          <Field label="Vehicle" className="lg:col-span-2">
             <TextInput value={filters.vehicle} onChange={(e) => setFilter("vehicle", e.target.value)} placeholder="Any" />
           </Field>
-          <Field label="Trailer or accessory">
+          <Field label="Trailer or accessory" className="lg:col-span-2">
             <TextInput value={filters.hitched} onChange={(e) => setFilter("hitched", e.target.value)} placeholder="Any" />
           </Field>
-          <VerdictFilter value={filters.level} onChange={(value) => setFilter("level", value)} />
+          <div className="lg:col-span-2">
+            <VerdictFilter value={filters.level} onChange={(value) => setFilter("level", value)} />
+          </div>
+          <Field label="Sort vehicles" className="lg:col-span-2">
+            <Select value={filters.vehicleSort} onChange={(e) => setFilter("vehicleSort", e.target.value)}>
+              {VEHICLE_ORDERS.map(([value, words]) => (
+                <option key={value} value={value}>
+                  {words}
+                </option>
+              ))}
+            </Select>
+          </Field>
+          <Field label="Sort trailers and accessories" className="lg:col-span-2">
+            <Select value={filters.hitchedSort} onChange={(e) => setFilter("hitchedSort", e.target.value)}>
+              {HITCHED_ORDERS.map(([value, words]) => (
+                <option key={value} value={value}>
+                  {words}
+                </option>
+              ))}
+            </Select>
+          </Field>
+          <div className="flex items-end lg:col-span-2">
+            <Button
+              type="button"
+              variant="secondary"
+              className="w-full"
+              aria-pressed={strongestFirst}
+              onClick={() => setFilterSet({ vehicleSort: "capacity-desc", hitchedSort: "weight-desc" })}
+            >
+              Heaviest load, strongest vehicle first
+            </Button>
+          </div>
         </form>
       </Card>
       {error ? <p role="alert" className="text-sm text-over">{(error as Error).message}</p> : null}
@@ -112,16 +226,22 @@ export function PairingMatrix({ initial, initialKey, initialFilters, cautions }:
         </p>
       ) : null}
       <Card>
-        <div className="w-full overflow-x-auto rounded-md" role="region" aria-label="Pairings" tabIndex={0} aria-busy={isLoading}>
+        {/* The box scrolls sideways, never the page: every column of the page is reachable at any width. */}
+        <div className="w-full max-w-full overflow-x-auto overscroll-x-contain rounded-md" role="region" aria-label="Pairings" tabIndex={0} aria-busy={isLoading} data-testid="pairings-scroller">
           <table className="w-full border-collapse text-left text-sm">
-            <caption className="sr-only">Vehicles down the side, trailers and accessories across the top</caption>
+            <caption className="sr-only">
+              Vehicles down the side ({VEHICLE_ORDERS.find(([value]) => value === filters.vehicleSort)?.[1].toLowerCase()}), trailers and accessories across the top (
+              {HITCHED_ORDERS.find(([value]) => value === filters.hitchedSort)?.[1].toLowerCase()})
+            </caption>
             <thead className="border-b border-rule bg-sunken">
               <tr>
-                <th scope="col" className="sticky left-0 z-10 bg-sunken px-3 py-2.5 text-xs font-semibold tracking-wide text-ink-soft uppercase">
+                {/* Held in place while the grid scrolls sideways; a solid background and an edge so cells do not show through. */}
+                <th scope="col" aria-sort={vehicleAria} className={cn(STICKY, "z-20 bg-sunken px-3 pt-2.5 pb-1 align-bottom text-xs font-semibold tracking-wide text-ink-soft uppercase")}>
                   Vehicle
+                  <span className="block font-normal tracking-normal normal-case">most it may pull</span>
                 </th>
                 {data?.columns.map((column) => (
-                  <th key={column.id} scope="col" className="min-w-40 px-2 py-2.5 align-bottom text-xs font-semibold text-ink">
+                  <th key={column.id} scope="col" className="min-w-40 px-2 pt-2.5 pb-1 align-bottom text-xs font-semibold text-ink" data-testid="pairing-column">
                     <Link href={`/fleet/${column.kind}/${column.id}`} className="underline decoration-rule">
                       {column.name}
                     </Link>
@@ -129,22 +249,30 @@ export function PairingMatrix({ initial, initialKey, initialFilters, cautions }:
                   </th>
                 ))}
               </tr>
+              {/* The columns are ordered by this row when sorted by weight: its header carries the order. */}
+              <tr>
+                <th scope="row" aria-sort={weightAria} className={cn(STICKY, "z-20 bg-sunken px-3 pt-1 pb-2.5 text-xs font-semibold text-ink-soft")}>
+                  Weight
+                </th>
+                {data?.columns.map((column) => (
+                  <th key={column.id} scope="col" className="px-2 pt-1 pb-2.5 text-xs font-semibold text-ink" data-testid="pairing-weight">
+                    <WeightHeader column={column} />
+                  </th>
+                ))}
+              </tr>
             </thead>
             <tbody className="divide-y divide-rule">
               {data && data.rows.length === 0 ? (
                 <tr>
-                  <td colSpan={1 + data.columns.length} className="px-3 py-8 text-center text-ink-soft">
+                  <td colSpan={1 + data.columns.length} className="px-3 py-8 text-left text-ink-soft sm:text-center">
                     No pairings match. Clear a filter, or add vehicles and trailers.
                   </td>
                 </tr>
               ) : null}
               {data?.rows.map((row) => (
                 <tr key={row.id} className="align-top" data-testid="pairing-row">
-                  <th scope="row" className="sticky left-0 z-10 max-w-44 bg-panel px-3 py-2 text-sm font-medium">
-                    <Link href={`/fleet/vehicles/${row.id}`} className="underline decoration-rule">
-                      {row.name}
-                    </Link>
-                    {row.measuredOn ? <span className="block text-xs font-normal text-ink-soft">hitch measured {row.measuredOn}</span> : null}
+                  <th scope="row" className={cn(STICKY, "z-10 bg-panel px-3 py-2 text-sm font-medium")}>
+                    <VehicleHeader row={row} />
                   </th>
                   {row.cells.map((cell, i) => (
                     <td key={data.columns[i]!.id} className={cn("relative px-1 py-1", !cell && "bg-sunken/40")}>
