@@ -71,15 +71,25 @@ export interface CheckWorkbenchProps {
   onSaveVehicleProfile?: SaveVehicleProfileHandler;
   /** Shown when signed out: a line saying nothing is saved and a link to sign in. */
   signedOut?: boolean;
+  /** The saved profiles `initialRig` was built from (a pairing opened from the fleet): their pickers name them. */
+  initialProfileIds?: ProfileIds;
 }
 
-export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio, frontAxleLossLimit, profiles, onSave, onSaveVehicleProfile, signedOut, place: home }: CheckWorkbenchProps) {
+/** Which saved profile each picker last filled its card from. */
+export interface ProfileIds {
+  vehicle?: string;
+  trailer?: string;
+  accessory?: string;
+}
+
+export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio, frontAxleLossLimit, profiles, onSave, onSaveVehicleProfile, signedOut, place: home, initialProfileIds }: CheckWorkbenchProps) {
   const [units, setUnits] = useState<UnitSystem>(startUnits);
   const [place, setPlace] = useState<PlaceChoice>(home ?? null);
   const glossary = (place && ruleSetFor(place)?.glossary) || "us";
   const [kind, setKind] = useState<HitchedKind>(initialRig?.accessory && !initialRig.trailer ? "accessory" : "trailer");
   const [collapsed, setCollapsed] = useState<Record<CardId, boolean>>({ vehicle: false, hitch: false, hitched: false });
   const [filledFrom, setFilledFrom] = useState<string | null>(null);
+  const [picked, setPicked] = useState<ProfileIds>(initialProfileIds ?? {});
   const kindRef = useRef(kind);
   useLayoutEffect(() => {
     kindRef.current = kind;
@@ -137,10 +147,12 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
       reset(emptyFormValues(units) as never);
       setKind("trailer");
       setFilledFrom(null);
+      setPicked({});
       return;
     }
     const sample = SAMPLE_RIGS.find((s) => s.id === id);
     if (!sample) return;
+    setPicked({});
     setKind(sample.rig.accessory && !sample.rig.trailer ? "accessory" : "trailer");
     reset(formValuesFromRig(sample.rig, units) as never);
     setCollapsed({ vehicle: false, hitch: false, hitched: false });
@@ -155,19 +167,23 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
 
   const pickVehicle = (id: string) => {
     const p = profiles?.vehicles.find((v) => v.id === id);
-    if (p) fill(p.rig, ["vehicle", "hitch", "load"], p.name);
+    if (!p) return;
+    fill(p.rig, ["vehicle", "hitch", "load"], p.name);
+    setPicked((current) => ({ ...current, vehicle: id }));
   };
   const pickTrailer = (id: string) => {
     const p = profiles?.trailers.find((v) => v.id === id);
     if (!p) return;
     setKind("trailer");
     fill(p.rig, ["trailer", "ballMount", "weightDistribution"], p.name);
+    setPicked((current) => ({ ...current, trailer: id }));
   };
   const pickAccessory = (id: string) => {
     const p = profiles?.accessories.find((v) => v.id === id);
     if (!p) return;
     setKind("accessory");
     fill(p.rig, ["accessory", "extender"], p.name);
+    setPicked((current) => ({ ...current, accessory: id }));
   };
 
   const saveWithErrors = useCallback(
@@ -258,7 +274,7 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
                   tools={
                     profiles?.vehicles.length || onSaveVehicleProfile ? (
                       <div className="flex flex-wrap items-end gap-3">
-                        <ProfilePicker label="Saved vehicle" options={profiles?.vehicles ?? []} onPick={pickVehicle} />
+                        <ProfilePicker label="Saved vehicle" options={profiles?.vehicles ?? []} onPick={pickVehicle} selectedId={picked.vehicle} />
                         {onSaveVehicleProfile ? <SaveVehicleProfile onSave={onSaveVehicleProfile} getPart={vehiclePart} /> : null}
                       </div>
                     ) : null
@@ -271,9 +287,9 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
               <RigCard id="workbench-hitched" title="What is hitched" summary={<HitchedSummary kind={kind} />} collapsed={collapsed.hitched} onToggle={() => toggle("hitched")}>
                 <HitchedChoice kind={kind} onChange={setKind} />
                 {kind === "trailer" ? (
-                  <TrailerFields tools={<ProfilePicker label="Saved trailer" options={profiles?.trailers ?? []} onPick={pickTrailer} />} />
+                  <TrailerFields tools={<ProfilePicker label="Saved trailer" options={profiles?.trailers ?? []} onPick={pickTrailer} selectedId={picked.trailer} />} />
                 ) : (
-                  <AccessoryFields tools={<ProfilePicker label="Saved rack or carrier" options={profiles?.accessories ?? []} onPick={pickAccessory} />} />
+                  <AccessoryFields tools={<ProfilePicker label="Saved rack or carrier" options={profiles?.accessories ?? []} onPick={pickAccessory} selectedId={picked.accessory} />} />
                 )}
               </RigCard>
             </div>

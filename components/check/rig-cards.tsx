@@ -483,15 +483,17 @@ export interface ProfilePickerProps {
   label: string;
   options: Array<{ id: string; name: string }>;
   onPick: (id: string) => void;
+  /** The saved profile the card was last filled from, named in the picker; "Choose…" when none. */
+  selectedId?: string;
 }
 
-/** A saved profile to fill the card from; stays on "Choose…" after use so it can be picked again. */
-export function ProfilePicker({ label, options, onPick }: ProfilePickerProps) {
+/** A saved profile to fill the card from; names the one the card was filled from, if any (choose another to change it). */
+export function ProfilePicker({ label, options, onPick, selectedId }: ProfilePickerProps) {
   if (!options.length) return null;
   return (
     <Field label={label} className="w-full sm:w-72">
       <Select
-        value=""
+        value={selectedId && options.some((o) => o.id === selectedId) ? selectedId : ""}
         onChange={(e) => {
           if (e.target.value) onPick(e.target.value);
         }}

@@ -22,7 +22,8 @@ export default async function CheckPage({ searchParams }: { searchParams: Promis
   const source = from.success ? await getCheck(access, from.data) : undefined;
   // A pairing from the fleet opens here with its two profiles filled in (the organisation's own only).
   const pick = (value: unknown) => (entityId.safeParse(value).success ? (value as string) : undefined);
-  const paired = source ? undefined : await rigFromProfiles(access, { vehicle: pick(params.vehicle), trailer: pick(params.trailer), accessory: pick(params.accessory) });
+  const pairedIds = { vehicle: pick(params.vehicle), trailer: pick(params.trailer), accessory: pick(params.accessory) };
+  const paired = source ? undefined : await rigFromProfiles(access, pairedIds);
   const initialRig = source?.rig ?? paired;
   const profiles = await listProfilesForCheck(access);
   const vehicleId = paired ? pick(params.vehicle) : undefined;
@@ -57,9 +58,15 @@ export default async function CheckPage({ searchParams }: { searchParams: Promis
         frontAxleLossLimit={access.organisation.frontAxleLossRatio}
         place={source?.result.rules?.place ?? placeFrom(access.organisation.country, access.organisation.region)}
         profiles={profiles}
+        initialProfileIds={paired ? pickedProfiles(paired, pairedIds) : undefined}
         onSave={can(access.role, "checks.save") ? saveCheckAction : undefined}
         onSaveVehicleProfile={can(access.role, "profiles.save") ? saveVehicleProfileAction : undefined}
       />
     </div>
   );
+}
+
+/** The profiles a pairing's rig was built from, as `rigFromProfiles` takes them: a trailer before an accessory. */
+function pickedProfiles(rig: { trailer?: unknown; accessory?: unknown }, ids: { vehicle?: string; trailer?: string; accessory?: string }) {
+  return { vehicle: ids.vehicle, trailer: rig.trailer ? ids.trailer : undefined, accessory: rig.trailer ? undefined : rig.accessory ? ids.accessory : undefined };
 }
