@@ -206,7 +206,7 @@ export function PairingMatrix({ initial, initialKey, initialFilters, cautions }:
             <Button
               type="button"
               variant="secondary"
-              className="w-full"
+              className="w-full aria-pressed:border-accent aria-pressed:bg-accent/10 aria-pressed:text-accent-strong"
               aria-pressed={strongestFirst}
               onClick={() => setFilterSet({ vehicleSort: "capacity-desc", hitchedSort: "weight-desc" })}
             >
