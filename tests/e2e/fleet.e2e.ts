@@ -79,8 +79,16 @@ describe("fleet: import, pairings, a pairing opened", () => {
     await page.goto("/fleet/matrix");
     await page.getByText("Before anyone hooks up").waitFor();
     await page.getByText("The lowest rating of any part is the limit for the whole rig.").waitFor();
-    await page.getByLabel("Vehicle", { exact: true }).fill("Imported truck 21");
-    await expect.poll(() => page.getByTestId("pairing-row").count()).toBe(1);
+    // Typed again until the grid takes it: what is typed before the grid has hydrated is lost.
+    await expect
+      .poll(
+        async () => {
+          await page.getByLabel("Vehicle", { exact: true }).fill("Imported truck 21");
+          return page.getByTestId("pairing-row").count();
+        },
+        { timeout: 30_000, interval: 1_000 },
+      )
+      .toBe(1);
     await page.getByLabel("Verdict").selectOption("over");
     await page.getByLabel("Vehicle", { exact: true }).fill("");
     await expect.poll(async () => {
