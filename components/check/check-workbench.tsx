@@ -2,8 +2,10 @@
 
 /**
  * The check screen ("the workbench"): the units, place and example pickers on top, the rig's inputs on the left
- * in three cards (rig-cards.tsx), the live verdict on the right (live-verdict.tsx), and the save areas
- * (save-check.tsx, save-vehicle-profile.tsx). Holds the form, the units, the place and what is hitched.
+ * in cards (rig-cards.tsx: the vehicle, the hitch, what is hitched, and weight distribution for a trailer on a
+ * ball mount) under a small sticky list of links to them, the live verdict on the right (live-verdict.tsx), and
+ * the save areas (save-check.tsx, save-vehicle-profile.tsx). Holds the form, the units, the place and what is
+ * hitched. Each card leads with the figures that decide most rigs; the rest sit in folds named by topic.
  */
 import { useCallback, useLayoutEffect, useMemo, useRef, useState } from "react";
 import Link from "next/link";
@@ -12,7 +14,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { Field, Select, cn } from "@/components/ui";
 import type { RigInput, UnitSystem } from "@/lib/towing";
 import { rigInputSchema } from "@/lib/validation/rig";
-import { RigCard, UnitsProvider, WordsProvider } from "./field-parts";
+import { AwaitedFiguresProvider, createAwaitedFigures, RigCard, UnitsProvider, WordsProvider } from "./field-parts";
 import { PlacePicker, type PlaceChoice } from "./place-picker";
 import { ruleSetFor } from "@/lib/towing/rules/places";
 import type { Place } from "@/lib/towing/rules/types";
@@ -24,8 +26,11 @@ import {
   HitchSummary,
   ProfilePicker,
   TrailerFields,
+  useBedHitch,
   VehicleFields,
   VehicleSummary,
+  WdSummary,
+  WeightDistributionFields,
 } from "./rig-cards";
 import {
   cardOf,
@@ -82,12 +87,66 @@ export interface ProfileIds {
   accessory?: string;
 }
 
+/** The weight-distribution card: for a trailer on a ball mount only (a bed hitch has none). */
+function WdCard({ collapsed, onToggle }: { collapsed: boolean; onToggle: () => void }) {
+  const bed = useBedHitch();
+  if (bed) return null;
+  return (
+    <RigCard id="workbench-wd" title="Weight distribution" summary={<WdSummary />} collapsed={collapsed} onToggle={onToggle}>
+      <WeightDistributionFields />
+    </RigCard>
+  );
+}
+
+/**
+ * A small list of links to the cards, sticky while the form scrolls: under the verdict bar on a phone, at the
+ * top of the form's column on a desktop.
+ */
+function CardNav({ kind, save }: { kind: HitchedKind; save: boolean }) {
+  const bed = useBedHitch() && kind === "trailer";
+  const links: Array<[string, string]> = [
+    ["workbench-vehicle", "Vehicle"],
+    ["workbench-hitch", "Hitch"],
+    ["workbench-hitched", kind === "trailer" ? "Trailer" : "Rack or carrier"],
+  ];
+  if (kind === "trailer" && !bed) links.push(["workbench-wd", "Weight distribution"]);
+  if (save) links.push(["workbench-save", "Save"]);
+  return (
+    <nav aria-label="Parts of the rig" className="sticky top-14 z-10 -mx-1 rounded-md border border-rule bg-panel/95 px-1 py-1 shadow-card backdrop-blur lg:top-2">
+      <ul className="flex gap-1 overflow-x-auto">
+        {links.map(([id, label]) => (
+          <li key={id} className="shrink-0">
+            <a
+              href={`#${id}`}
+              onClick={(e) => {
+                const target = document.getElementById(id);
+                if (!target) return;
+                e.preventDefault();
+                target.scrollIntoView({ block: "start" });
+                const heading = target.querySelector<HTMLElement>("h2");
+                if (heading) {
+                  heading.tabIndex = -1;
+                  heading.focus({ preventScroll: true });
+                }
+              }}
+              className="inline-flex min-h-9 items-center rounded px-2.5 text-sm font-medium whitespace-nowrap text-accent-strong hover:bg-accent-soft"
+            >
+              {label}
+            </a>
+          </li>
+        ))}
+      </ul>
+    </nav>
+  );
+}
+
 export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio, frontAxleLossLimit, profiles, onSave, onSaveVehicleProfile, signedOut, place: home, initialProfileIds }: CheckWorkbenchProps) {
   const [units, setUnits] = useState<UnitSystem>(startUnits);
   const [place, setPlace] = useState<PlaceChoice>(home ?? null);
   const glossary = (place && ruleSetFor(place)?.glossary) || "us";
   const [kind, setKind] = useState<HitchedKind>(initialRig?.accessory && !initialRig.trailer ? "accessory" : "trailer");
-  const [collapsed, setCollapsed] = useState<Record<CardId, boolean>>({ vehicle: false, hitch: false, hitched: false });
+  const [collapsed, setCollapsed] = useState<Record<CardId, boolean>>({ vehicle: false, hitch: false, hitched: false, wd: false });
+  const awaited = useMemo(() => createAwaitedFigures(), []);
   const [filledFrom, setFilledFrom] = useState<string | null>(null);
   const [picked, setPicked] = useState<ProfileIds>(initialProfileIds ?? {});
   const kindRef = useRef(kind);
@@ -155,7 +214,7 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
     setPicked({});
     setKind(sample.rig.accessory && !sample.rig.trailer ? "accessory" : "trailer");
     reset(formValuesFromRig(sample.rig, units) as never);
-    setCollapsed({ vehicle: false, hitch: false, hitched: false });
+    setCollapsed({ vehicle: false, hitch: false, hitched: false, wd: false });
     setFilledFrom(`Example loaded: ${sample.label}. Invented figures, for practice only.`);
   };
 
@@ -210,8 +269,10 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
   return (
     <UnitsProvider value={units}>
       <WordsProvider value={glossary}>
+      <AwaitedFiguresProvider value={awaited}>
       <FormProvider {...form}>
-        <div className="space-y-4">
+        {/* data-wide-page lets the page's frame widen on a large screen (components/shell/app-shell.tsx). */}
+        <div className="space-y-4" data-wide-page>
           {/* Tools: units, examples, and the signed-out notice. */}
           <div className="flex flex-wrap items-end gap-x-5 gap-y-3">
             <fieldset className="min-w-0">
@@ -269,6 +330,7 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
             {/* A group, not a <form>: the figures are never submitted (the verdict follows each keystroke), and
                 the "save vehicle as profile" dialog inside holds a form of its own, which may not nest in a form. */}
             <div role="form" aria-label="Rig figures" className="min-w-0 space-y-4 lg:col-start-1">
+              <CardNav kind={kind} save={!!onSave} />
               <RigCard id="workbench-vehicle" title="Vehicle" summary={<VehicleSummary />} collapsed={collapsed.vehicle} onToggle={() => toggle("vehicle")}>
                 <VehicleFields
                   tools={
@@ -292,6 +354,9 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
                   <AccessoryFields tools={<ProfilePicker label="Saved rack or carrier" options={profiles?.accessories ?? []} onPick={pickAccessory} selectedId={picked.accessory} />} />
                 )}
               </RigCard>
+              {kind === "trailer" ? (
+                <WdCard collapsed={collapsed.wd} onToggle={() => toggle("wd")} />
+              ) : null}
             </div>
 
             <LiveVerdict control={control} kind={kind} tightMarginRatio={tightMarginRatio} frontAxleLossLimit={frontAxleLossLimit} place={place} onJump={jump} />
@@ -303,6 +368,7 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
           </GlossaryDisclosure>
         </div>
       </FormProvider>
+      </AwaitedFiguresProvider>
       </WordsProvider>
     </UnitsProvider>
   );

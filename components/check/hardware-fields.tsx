@@ -8,7 +8,7 @@
 import { useFormContext, useWatch } from "react-hook-form";
 import { PIN_SIZES, SHANK_SIZES } from "@/lib/towing";
 import { TermHelp } from "@/components/glossary/term-help";
-import { ChoiceField, FieldGrid, FieldGroup, NumField, YesNoField } from "./field-parts";
+import { ChoiceField, FieldGrid, MoreSection, NumField, YesNoField } from "./field-parts";
 import type { HitchedKind, RigFormValues } from "./rig-form";
 
 const inches = (size: string) => ({ value: size, label: `${size} in` });
@@ -16,14 +16,14 @@ const inches = (size: string) => ({ value: size, label: `${size} in` });
 /** The vehicle card: each tyre's maximum load and the tow rating for a trailer without brakes. */
 export function VehicleTyreFields() {
   return (
-    <FieldGroup title="Tyres and unbraked towing" note="Each tyre's maximum load is moulded on its sidewall; the unbraked figure is in the owner's manual, towing section.">
+    <MoreSection title="Tyres and unbraked towing" note="Each tyre's maximum load is moulded on its sidewall; the unbraked figure is in the owner's manual, towing section.">
       <FieldGrid>
         <NumField name="vehicle.tyreLoadFront" label="Front tyre load capacity (each tyre)" kind="mass" help={<TermHelp term="tyre-load">The &ldquo;max load&rdquo; on one front tyre&rsquo;s sidewall; the front axle has two.</TermHelp>} />
         <NumField name="vehicle.tyreLoadRear" label="Rear tyre load capacity (each tyre)" kind="mass" help={<TermHelp term="tyre-load">The &ldquo;max load&rdquo; on one rear tyre&rsquo;s sidewall; two on the axle, four with dual wheels.</TermHelp>} />
         <YesNoField name="vehicle.dualRearWheels" label="Dual rear wheels" help="Two tyres on each side of the rear axle." />
         <NumField name="vehicle.towRatingUnbraked" label="Tow rating for a trailer without brakes" kind="mass" help={<TermHelp term="tow-rating">Owner&rsquo;s manual, towing section: a limit whenever the trailer has no brakes.</TermHelp>} />
       </FieldGrid>
-    </FieldGroup>
+    </MoreSection>
   );
 }
 
@@ -45,7 +45,7 @@ export function HitchHardwareFields({ kind }: { kind: HitchedKind }) {
   if (kind === "trailer" && (hitchType === "fifth-wheel" || hitchType === "gooseneck")) return null;
   const trailer = kind === "trailer";
   return (
-    <FieldGroup title="Pin, hole and adapters" note="Sizes as the trade names them, stamped on the part or measured across it. An adapter or a sleeve carries the whole load: its own label gives its ratings.">
+    <MoreSection title="Pin, hole and adapters" note="Sizes as the trade names them, stamped on the part or measured across it. An adapter or a sleeve carries the whole load: its own label gives its ratings.">
       <div className="space-y-4">
         {trailer ? (
           <FieldGrid>
@@ -68,7 +68,7 @@ export function HitchHardwareFields({ kind }: { kind: HitchedKind }) {
           </>
         ) : null}
       </div>
-    </FieldGroup>
+    </MoreSection>
   );
 }
 
@@ -78,7 +78,7 @@ export function TrailerPlateFields() {
   const hitchType = useWatch({ control, name: "trailer.hitchType" });
   const bed = hitchType === "fifth-wheel" || hitchType === "gooseneck";
   return (
-    <FieldGroup title="The trailer's plate and tyres" note="From the trailer's own plate or label, and each tyre's sidewall.">
+    <MoreSection title="The trailer's plate and tyres" note="From the trailer's own plate or label, and each tyre's sidewall.">
       <FieldGrid>
         <NumField name="trailer.axleRating" label="Trailer axle rating (each axle)" kind="mass" help={<TermHelp term="trailer-gvwr">The trailer&rsquo;s plate, or the tag on the axle itself.</TermHelp>} />
         <ChoiceField name="trailer.axleCount" label="Trailer axles" numeric emptyLabel="Not given" options={[1, 2, 3, 4].map((n) => ({ value: String(n), label: n === 1 ? "1 axle" : `${n} axles` }))} help="Count them." />
@@ -87,6 +87,6 @@ export function TrailerPlateFields() {
           <ChoiceField name="trailer.ballShankSize" label="Ball shank" emptyLabel="Not given" options={SHANK_SIZES.map(inches)} help={<TermHelp term="ball-shank">The threaded stem under the ball: stamped on it, or measured across the threads.</TermHelp>} />
         )}
       </FieldGrid>
-    </FieldGroup>
+    </MoreSection>
   );
 }

@@ -5,12 +5,14 @@
  * place applies) and the side view. Recomputed in the browser on every keystroke that leaves the inputs valid;
  * the last good verdict stays up, marked as waiting, while a field is invalid.
  */
-import { useDeferredValue, useMemo, useState } from "react";
+import { useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
 import { useWatch, type Control } from "react-hook-form";
 import { ChevronDown, CircleAlert } from "lucide-react";
 import { Card, CardBody, CardHeader, VerdictBadge, cn, levelWords } from "@/components/ui";
 import { evaluateRig, type RigInput, type RigResult, type AccessoryFitResult } from "@/lib/towing";
 import { AppliedRules, localRulesOf } from "@/components/rules/applied-rules";
+import { stillToMeasure } from "@/lib/still-to-measure";
+import { useAwaitedStore } from "./field-parts";
 import { parseCandidate } from "./parse-candidate";
 import type { PlaceChoice } from "./place-picker";
 import { toRigCandidate, type HitchedKind, type RigFormValues } from "./rig-form";
@@ -53,6 +55,23 @@ export function LiveVerdict({ control, kind, tightMarginRatio, frontAxleLossLimi
   if (evaluated && evaluated !== lastGood) setLastGood(evaluated);
   const shown = evaluated ?? lastGood;
   const [open, setOpen] = useState(false);
+  const asideRef = useRef<HTMLElement>(null);
+  const barButtonRef = useRef<HTMLButtonElement>(null);
+  // The cards' folds say how many of their figures the verdict still waits for.
+  const awaitedStore = useAwaitedStore();
+  const shownResult = shown?.result;
+  useEffect(() => {
+    if (awaitedStore && shownResult) awaitedStore.set(stillToMeasure(shownResult.checks).map((m) => m.field));
+  }, [awaitedStore, shownResult]);
+  // The phone's "Checks" brings the whole panel into view and moves the focus to it.
+  useEffect(() => {
+    if (!open) return;
+    const panel = asideRef.current;
+    if (!panel) return;
+    panel.scrollTop = 0;
+    panel.scrollIntoView({ block: "start" });
+    panel.focus({ preventScroll: true });
+  }, [open]);
   // The drawing follows a moment after the verdict (a deferred render), so typing never waits for it.
   const deferredValues = useDeferredValue(values);
   const sideRig = useMemo(() => toRigCandidate(deferredValues, kind) as RigInput, [deferredValues, kind]);
@@ -85,6 +104,7 @@ export function LiveVerdict({ control, kind, tightMarginRatio, frontAxleLossLimi
       {/* Phone: a compact bar on top that opens to the full list. */}
       <div className="sticky top-0 z-20 order-first rounded-card border border-rule bg-panel/95 px-3 py-2 shadow-card backdrop-blur lg:hidden">
         <button
+          ref={barButtonRef}
           type="button"
           onClick={() => setOpen((o) => !o)}
           aria-expanded={open}
@@ -103,10 +123,18 @@ export function LiveVerdict({ control, kind, tightMarginRatio, frontAxleLossLimi
       {/* Phone: the full list opens as a sheet under the bar, wherever the form is scrolled to. Desktop: the
           column stretches over every row so its panel stays in view (sticky) while the form scrolls. */}
       <aside
+        ref={asideRef}
         id="workbench-verdict"
         aria-label="Verdict"
+        tabIndex={-1}
+        onKeyDown={(e) => {
+          if (e.key === "Escape" && open) {
+            setOpen(false);
+            barButtonRef.current?.focus();
+          }
+        }}
         className={cn(
-          "order-first min-w-0 lg:static lg:order-none lg:col-start-2 lg:row-span-4 lg:row-start-1 lg:block lg:max-h-none lg:self-stretch lg:overflow-visible lg:p-0",
+          "order-first min-w-0 outline-none lg:static lg:order-none lg:col-start-2 lg:row-span-4 lg:row-start-1 lg:block lg:max-h-none lg:self-stretch lg:overflow-visible lg:p-0",
           open ? "fixed inset-x-2 top-16 bottom-2 z-30 block overflow-y-auto overscroll-contain rounded-card" : "hidden",
         )}
       >

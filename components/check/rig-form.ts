@@ -212,10 +212,14 @@ export function replaceGroups(values: RigFormValues, part: Plain, groups: readon
 }
 
 /** Which card holds a field, for jumping to it from the verdict's list of invalid fields. */
-export type CardId = "vehicle" | "hitch" | "hitched";
+export type CardId = "vehicle" | "hitch" | "hitched" | "wd";
+
+/** The vehicle's and the hitch's figures that sit in the weight-distribution card, with its own. */
+const WD_CARD_FIELDS = new Set(["vehicle.towRatingWd", "vehicle.tongueWeightLimitWd", "vehicle.wdRequiredAbove", "hitch.gtwRatingWd", "hitch.twRatingWd"]);
 
 export function cardOf(path: string): CardId {
   const head = path.split(".")[0];
+  if (head === "weightDistribution" || WD_CARD_FIELDS.has(path)) return "wd";
   if (head === "vehicle" || head === "load") return "vehicle";
   if (head === "hitch" || head === "ballMount" || head === "extender" || head === "receiverAdapter" || head === "ballSleeve") return "hitch";
   return "hitched";

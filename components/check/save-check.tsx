@@ -45,7 +45,7 @@ export function SaveCheck({ onSave, getRig }: { onSave: SaveCheckHandler; getRig
   const errorOf = (key: string) => state?.fieldErrors?.[key]?.[0];
 
   return (
-    <Card as="section" aria-labelledby="workbench-save-title" className="min-w-0 lg:col-start-1">
+    <Card as="section" id="workbench-save" aria-labelledby="workbench-save-title" className="min-w-0 scroll-mt-32 lg:col-start-1 lg:scroll-mt-16">
       <CardHeader titleId="workbench-save-title" title="Save check" description="Keeps the figures and the verdict, for the customer's page and for later." />
       <CardBody>
         <form onSubmit={submit} noValidate className="space-y-4">

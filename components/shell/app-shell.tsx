@@ -11,12 +11,12 @@ import { NavLinks } from "./nav-links";
 export function AppShell({ access, mailbox, children }: { access: AccessContext; mailbox: boolean; children: React.ReactNode }) {
   const items = navigationFor(access.role, { mailbox });
   return (
-    <div className="flex min-h-dvh flex-col">
+    <div className="group/shell flex min-h-dvh flex-col">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-50 focus:rounded-md focus:bg-panel focus:px-3 focus:py-2">
         Skip to content
       </a>
       <header className="no-print border-b border-rule bg-panel">
-        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-2 sm:px-6">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-2 sm:px-6 xl:group-has-[[data-wide-page]]/shell:max-w-[84rem]">
           <BrandLink href="/overview" className="mr-2" />
           <nav aria-label="Sections" className="order-last -mx-1 w-full sm:order-none sm:mx-0 sm:w-auto">
             <NavLinks items={items} />
@@ -64,7 +64,8 @@ export function AppShell({ access, mailbox, children }: { access: AccessContext;
           </div>
         ) : null}
       </header>
-      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:px-6 sm:py-8 print:max-w-none print:p-0">
+      {/* A page that needs the room (the check screen, marked data-wide-page) widens the frame on a large screen. */}
+      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:px-6 sm:py-8 xl:group-has-[[data-wide-page]]/shell:max-w-[84rem] print:max-w-none print:p-0">
         {children}
       </main>
     </div>

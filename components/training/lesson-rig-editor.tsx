@@ -9,7 +9,7 @@ import { FormProvider, useForm, useWatch, type Resolver } from "react-hook-form"
 import { zodResolver } from "@hookform/resolvers/zod";
 import { Button, Field, Textarea, cn } from "@/components/ui";
 import { RigCard, UnitsProvider } from "@/components/check/field-parts";
-import { AccessoryFields, HitchedChoice, HitchedSummary, HitchFields, HitchSummary, TrailerFields, VehicleFields, VehicleSummary } from "@/components/check/rig-cards";
+import { AccessoryFields, HitchedChoice, HitchedSummary, HitchFields, HitchSummary, TrailerFields, VehicleFields, VehicleSummary, WdSummary, WeightDistributionFields } from "@/components/check/rig-cards";
 import { convertFormValues, formValuesFromRig, toRigCandidate, type CardId, type HitchedKind, type RigFormValues } from "@/components/check/rig-form";
 import { parseRig, type RigInput, type UnitSystem } from "@/lib/towing";
 import { rigInputSchema } from "@/lib/validation/rig";
@@ -34,7 +34,7 @@ export function LessonRigEditor({ initialJson, onChange }: LessonRigEditorProps)
   const initialRig = useMemo(() => rigFromJson(initialJson), [initialJson]);
   const [units, setUnits] = useState<UnitSystem>(initialRig?.units ?? "imperial");
   const [kind, setKind] = useState<HitchedKind>(initialRig?.accessory && !initialRig.trailer ? "accessory" : "trailer");
-  const [collapsed, setCollapsed] = useState<Record<CardId, boolean>>({ vehicle: false, hitch: true, hitched: true });
+  const [collapsed, setCollapsed] = useState<Record<CardId, boolean>>({ vehicle: false, hitch: true, hitched: true, wd: true });
   const [pasted, setPasted] = useState("");
   const [pasteError, setPasteError] = useState<string>();
   const kindRef = useRef(kind);
@@ -104,6 +104,11 @@ export function LessonRigEditor({ initialJson, onChange }: LessonRigEditorProps)
             <HitchedChoice kind={kind} onChange={setKind} />
             {kind === "trailer" ? <TrailerFields /> : <AccessoryFields />}
           </RigCard>
+          {kind === "trailer" ? (
+            <RigCard id="lesson-wd" title="Weight distribution" summary={<WdSummary />} collapsed={collapsed.wd} onToggle={() => toggle("wd")}>
+              <WeightDistributionFields />
+            </RigCard>
+          ) : null}
           <details className="rounded-md border border-dashed border-rule px-4 py-3 text-sm">
             <summary className="cursor-pointer font-medium text-accent-strong">The rig as JSON (to copy, or to paste one in)</summary>
             <pre className="mt-3 max-h-64 overflow-auto rounded bg-sunken p-3 font-mono text-[0.8125rem] whitespace-pre-wrap text-ink" data-testid="lesson-rig-json">
