@@ -112,7 +112,7 @@ function CardNav({ kind, save }: { kind: HitchedKind; save: boolean }) {
   if (kind === "trailer" && !bed) links.push(["workbench-wd", "Weight distribution"]);
   if (save) links.push(["workbench-save", "Save"]);
   return (
-    <nav aria-label="Parts of the rig" className="sticky top-14 z-10 -mx-1 rounded-md border border-rule bg-panel/95 px-1 py-1 shadow-card backdrop-blur lg:top-2">
+    <nav aria-label="Parts of the rig" className="sticky top-14 z-10 min-w-0 rounded-md border border-rule bg-panel/95 px-1 py-1 shadow-card backdrop-blur lg:top-2 lg:col-start-1">
       <ul className="flex gap-1 overflow-x-auto">
         {links.map(([id, label]) => (
           <li key={id} className="shrink-0">
@@ -329,8 +329,8 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
           <div className="grid grid-cols-1 items-start gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,26rem)] lg:gap-6 xl:grid-cols-[minmax(0,1fr)_minmax(0,30rem)]">
             {/* A group, not a <form>: the figures are never submitted (the verdict follows each keystroke), and
                 the "save vehicle as profile" dialog inside holds a form of its own, which may not nest in a form. */}
+            <CardNav kind={kind} save={!!onSave} />
             <div role="form" aria-label="Rig figures" className="min-w-0 space-y-4 lg:col-start-1">
-              <CardNav kind={kind} save={!!onSave} />
               <RigCard id="workbench-vehicle" title="Vehicle" summary={<VehicleSummary />} collapsed={collapsed.vehicle} onToggle={() => toggle("vehicle")}>
                 <VehicleFields
                   tools={

@@ -84,6 +84,8 @@ describe("the counter check, saved, shared and withdrawn", () => {
     const verdict = page.getByTestId("verdict-level").first();
     await expect.poll(() => verdict.getAttribute("data-level")).toBe("within");
     // Geometry: the demo pickup's receiver and the camper's coupler need a small drop; a 12 in drop is far off level
+    // (the drop sits in the hitch card's "Ball mount and heights" fold).
+    await page.locator('[data-testid="more-section"][data-title="Ball mount and heights"] > summary').click();
     await page.getByLabel("Drop (negative for a rise)").fill("12");
     await expect.poll(() => verdict.getAttribute("data-level")).toBe("adjust");
     await expect.poll(() => page.getByTestId("check-ball-mount").first().getAttribute("data-status")).toBe("adjust");
