@@ -112,7 +112,7 @@ function CardNav({ kind, save }: { kind: HitchedKind; save: boolean }) {
   if (kind === "trailer" && !bed) links.push(["workbench-wd", "Weight distribution"]);
   if (save) links.push(["workbench-save", "Save"]);
   return (
-    <nav aria-label="Parts of the rig" className="sticky top-14 z-10 min-w-0 rounded-md border border-rule bg-panel/95 px-1 py-1 shadow-card backdrop-blur lg:top-2 lg:col-start-1">
+    <nav aria-label="Parts of the rig" className="sticky top-[2.75rem] z-10 min-w-0 rounded-md border border-rule bg-panel/95 px-1 py-1 shadow-card backdrop-blur lg:top-2 lg:col-start-1">
       <ul className="flex gap-1 overflow-x-auto">
         {links.map(([id, label]) => (
           <li key={id} className="shrink-0">

@@ -459,7 +459,7 @@ export function TrailerFields({ tools }: { tools?: ReactNode }) {
       <FieldGroup title="Trailer">
         <FieldGrid>
           <ChoiceField name="trailer.type" label="Trailer type" options={TRAILER_TYPES.map((t) => ({ value: t, label: TRAILER_TYPE_LABELS[t] }))} help="Sets the usual tongue-weight band." />
-          <ChoiceField name="trailer.hitchType" label="Hitched by" emptyLabel="Ball mount in the receiver" options={(Object.keys(HITCH_TYPE_LABELS) as Array<keyof typeof HITCH_TYPE_LABELS>).map((t) => ({ value: t, label: HITCH_TYPE_LABELS[t] }))} help={<TermHelp term="bed-hitch">A fifth wheel or gooseneck sits in the bed over or ahead of the rear axle; its pin weight is usually 15 to 25 % of the trailer.</TermHelp>} />
+          <ChoiceField name="trailer.hitchType" label="Hitched by" emptyLabel="Receiver ball mount" options={(Object.keys(HITCH_TYPE_LABELS) as Array<keyof typeof HITCH_TYPE_LABELS>).map((t) => ({ value: t, label: HITCH_TYPE_LABELS[t] }))} help={<TermHelp term="bed-hitch">A fifth wheel or gooseneck sits in the bed over or ahead of the rear axle; its pin weight is usually 15 to 25 % of the trailer.</TermHelp>} />
           <NumField name="trailer.grossTrailerWeight" label="Gross trailer weight" kind="mass" help={<TermHelp term="gross-trailer-weight">Loaded as it will travel: a public scale, or the trailer&rsquo;s own GVWR as the upper bound.</TermHelp>} />
           <NumField name="trailer.tongueWeight" label={bed ? "Pin weight" : "Tongue weight"} kind="mass" help={<TermHelp term="tongue-weight">A tongue scale, a bathroom scale and beam, or the difference at a public scale; spring bars released.</TermHelp>} />
           <TongueBasis />
