@@ -5,6 +5,8 @@ import userEvent from "@testing-library/user-event";
 import { CheckWorkbench } from "@/components/check/check-workbench";
 import type { RigInput } from "@/lib/towing";
 
+// The screen loads its live verdict as a later chunk; here it renders at once.
+vi.mock("@/components/check/live-verdict-lazy", async () => ({ LiveVerdict: (await import("@/components/check/live-verdict")).LiveVerdict }));
 vi.mock("next/dynamic", () => ({ default: () => () => <div data-testid="chart-stub" /> }));
 
 afterEach(cleanup);
