@@ -46,9 +46,9 @@ describe("the short counter form on a desktop", () => {
     await page.goto("/check");
     await waitForHydration(page);
     const vehicle = page.locator("#workbench-vehicle");
-    expect(await vehicle.getByLabel("Tow rating", { exact: true }).isVisible()).toBe(true);
-    expect(await vehicle.getByLabel("GCWR", { exact: true }).isVisible()).toBe(true);
-    expect(await vehicle.getByLabel("Front GAWR").isVisible()).toBe(false);
+    await vehicle.getByLabel("Tow rating", { exact: true }).waitFor();
+    await vehicle.getByLabel("GCWR", { exact: true }).waitFor();
+    await vehicle.getByLabel("Front GAWR").waitFor({ state: "hidden" });
     const folds = page.getByTestId("more-section");
     const titles = await folds.evaluateAll((els) => els.map((el) => el.getAttribute("data-title")));
     expect(titles).toContain("Axle ratings, weights and wheelbase");
@@ -84,7 +84,7 @@ describe("the short counter form on a desktop", () => {
     });
     await expect.poll(() => fold.getAttribute("open")).not.toBeNull();
     await expect.poll(() => fold.locator(":scope > summary").innerText()).toMatch(/1 to fix/);
-    expect(await page.getByLabel("Fold clearance needed").isVisible()).toBe(true);
+    await page.getByLabel("Fold clearance needed").waitFor();
   });
 
   it("jumps between the cards from the sticky links", async () => {
@@ -96,7 +96,7 @@ describe("the short counter form on a desktop", () => {
     await expect.poll(saveTop).toBeLessThan(WIDE.height - 200);
     expect(await saveTop()).toBeGreaterThanOrEqual(0);
     // Still in view after the scroll: the links themselves and the compact verdict beside the form.
-    expect(await nav.isVisible()).toBe(true);
+    await nav.waitFor();
     const navBox = await nav.boundingBox();
     expect(navBox!.y).toBeGreaterThanOrEqual(0);
     const level = await page.getByTestId("verdict-level").first().boundingBox();
@@ -136,8 +136,8 @@ describe("the short counter form on a desktop", () => {
     // under the tongue's 120 / 900 = 13.3 % against the 900 lb limit with weight distribution.
     await expect.poll(() => withWd.getAttribute("data-level")).toBe("within");
     await expect.poll(() => withWd.innerText()).toMatch(/Governs: Safety chain rating \(each chain\) \(7,000 lb\)/);
-    expect(await withWd.innerText()).toMatch(/As entered/);
-    expect(await without.innerText()).not.toMatch(/As entered/);
+    await expect.poll(() => withWd.innerText()).toMatch(/As entered/);
+    await expect.poll(() => without.innerText()).not.toMatch(/As entered/);
     await shoot(page, "check-form-trailer-wd-desktop");
   });
 
@@ -150,7 +150,7 @@ describe("the short counter form on a desktop", () => {
     await page.getByText("Neither chosen: the checks take it as an estimate until it is marked as weighed.").waitFor();
     const row = page.getByTestId("check-tongue-measure").first();
     await expect.poll(() => row.getAttribute("data-status")).toBe("incomplete");
-    expect(await row.innerText()).toMatch(/was not marked as weighed, so it is taken as an estimate/);
+    await expect.poll(() => row.innerText()).toMatch(/was not marked as weighed, so it is taken as an estimate/);
     await page.getByLabel("Weighed", { exact: true }).check();
     await expect.poll(() => row.getAttribute("data-status")).toBe("within");
     expect(await page.getByText(/^Neither chosen:/).count()).toBe(0);
