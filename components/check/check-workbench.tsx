@@ -7,16 +7,14 @@
  * the save areas (save-check.tsx, save-vehicle-profile.tsx). Holds the form, the units, the place and what is
  * hitched. Each card leads with the figures that decide most rigs; the rest sit in folds named by topic.
  */
-import { useCallback, useLayoutEffect, useMemo, useRef, useState } from "react";
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
 import Link from "next/link";
 import { FormProvider, useForm, type Resolver } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
 import { Field, Select, cn } from "@/components/ui";
 import type { RigInput, UnitSystem } from "@/lib/towing";
-import { rigInputSchema } from "@/lib/validation/rig";
 import { AwaitedFiguresProvider, createAwaitedFigures, RigCard, UnitsProvider, WordsProvider } from "./field-parts";
 import { PlacePicker, type PlaceChoice } from "./place-picker";
-import { ruleSetFor } from "@/lib/towing/rules/places";
+import { glossaryFor } from "@/lib/towing/rules/place-list";
 import type { Place } from "@/lib/towing/rules/types";
 import {
   AccessoryFields,
@@ -49,7 +47,7 @@ import { GlossaryList } from "@/components/glossary/glossary-list";
 import { SYMBOLS, TERMS } from "@/lib/glossary";
 import { SAMPLE_RIGS } from "./sample-rigs";
 import { LiveVerdict } from "./live-verdict-lazy";
-import { parseCandidate } from "./parse-candidate";
+import { loadedParser, loadParser } from "./parser-loader";
 import { SaveCheck, type SaveCheckHandler, type SaveCheckInput } from "./save-check";
 import { SaveVehicleProfile, type SaveVehicleProfileHandler } from "./save-vehicle-profile";
 
@@ -143,7 +141,7 @@ function CardNav({ kind, save }: { kind: HitchedKind; save: boolean }) {
 export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio, frontAxleLossLimit, profiles, onSave, onSaveVehicleProfile, signedOut, place: home, initialProfileIds }: CheckWorkbenchProps) {
   const [units, setUnits] = useState<UnitSystem>(startUnits);
   const [place, setPlace] = useState<PlaceChoice>(home ?? null);
-  const glossary = (place && ruleSetFor(place)?.glossary) || "us";
+  const glossary = glossaryFor(place);
   const [kind, setKind] = useState<HitchedKind>(initialRig?.accessory && !initialRig.trailer ? "accessory" : "trailer");
   const [collapsed, setCollapsed] = useState<Record<CardId, boolean>>({ vehicle: false, hitch: false, hitched: false, wd: false });
   const awaited = useMemo(() => createAwaitedFigures(), []);
@@ -156,9 +154,13 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
 
   // The shared schema checks the values as the rig will be built from them (only the chosen hitched item,
   // blank groups left out), so a field's message matches what the verdict sees.
-  const resolver = useMemo<Resolver<RigFormValues, unknown, RigInput>>(() => {
-    const zod = zodResolver(rigInputSchema) as unknown as Resolver<RigFormValues, unknown, RigInput>;
-    return (values, context, options) => zod(toRigCandidate(values, kindRef.current) as RigFormValues, context, options);
+  // The schema arrives as its own chunk just after the page (parser-loader.ts): the first check waits for it.
+  const resolver = useMemo<Resolver<RigFormValues, unknown, RigInput>>(
+    () => async (values, context, options) => (await loadParser()).resolveCandidate(toRigCandidate(values, kindRef.current) as RigFormValues, context, options),
+    [],
+  );
+  useEffect(() => {
+    void loadParser();
   }, []);
 
   const defaultValues = useMemo(() => formValuesFromRig(initialRig, startUnits), [initialRig, startUnits]);
@@ -171,8 +173,8 @@ export function CheckWorkbench({ initialRig, units: startUnits, tightMarginRatio
   const { control, getValues, reset, setError, setFocus } = form;
 
   const currentRig = useCallback((): RigInput | null => {
-    const parsed = parseCandidate(getValues(), kindRef.current);
-    return parsed.ok ? parsed.rig : null;
+    const parsed = loadedParser()?.parseCandidate(getValues(), kindRef.current);
+    return parsed?.ok ? parsed.rig : null;
   }, [getValues]);
 
   const toggle = (card: CardId) => setCollapsed((c) => ({ ...c, [card]: !c[card] }));

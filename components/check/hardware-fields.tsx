@@ -6,7 +6,7 @@
  * reducer sleeve, and the trailer's plate, ball shank and tyres. Each says where its figure is found.
  */
 import { useFormContext, useWatch } from "react-hook-form";
-import { PIN_SIZES, SHANK_SIZES } from "@/lib/towing";
+import { PIN_SIZES, SHANK_SIZES } from "@/lib/towing/choices";
 import { TermHelp } from "@/components/glossary/term-help";
 import { ChoiceField, FieldGrid, MoreSection, NumField, YesNoField } from "./field-parts";
 import type { HitchedKind, RigFormValues } from "./rig-form";

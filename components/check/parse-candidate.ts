@@ -2,6 +2,8 @@
  * The check screen's form values parsed as the core will see them: the rig built from the values (only the
  * chosen hitched item, blank groups left out) and checked by the shared schema, one message per field.
  */
+import { zodResolver } from "@hookform/resolvers/zod";
+import type { Resolver } from "react-hook-form";
 import type { RigInput } from "@/lib/towing";
 import { rigInputSchema } from "@/lib/validation/rig";
 import { toRigCandidate, type HitchedKind, type RigFormValues } from "./rig-form";
@@ -21,3 +23,6 @@ export function parseCandidate(values: RigFormValues, kind: HitchedKind): Parsed
   }
   return { ok: false, issues };
 }
+
+/** The form's resolver over the rig as it will be built (the caller builds the candidate from the values). */
+export const resolveCandidate = zodResolver(rigInputSchema) as unknown as Resolver<RigFormValues, unknown, RigInput>;

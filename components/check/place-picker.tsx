@@ -1,7 +1,7 @@
 "use client";
 /** Choose the place one check is read for: the organisation's own, another, or none. */
 import { Field, Select } from "@/components/ui";
-import { COUNTRIES, placeLabel } from "@/lib/towing/rules/places";
+import { COUNTRIES, placeLabel } from "@/lib/towing/rules/place-list";
 import type { Place } from "@/lib/towing/rules/types";
 
 export type PlaceChoice = Place | null;

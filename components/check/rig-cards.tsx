@@ -8,7 +8,7 @@ import { useId, type ReactNode } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
 import { Field, Select, cn } from "@/components/ui";
 import { formatQuantity } from "@/lib/format";
-import { ACCESSORY_TYPES, BALL_SIZES, BRAKE_TYPES, RECEIVER_SIZES, TRAILER_TYPES, type AccessoryType, type HitchType, type TrailerType } from "@/lib/towing";
+import { ACCESSORY_TYPES, BALL_SIZES, BRAKE_TYPES, RECEIVER_SIZES, TRAILER_TYPES, type AccessoryType, type HitchType, type TrailerType } from "@/lib/towing/choices";
 import { TermHelp } from "@/components/glossary/term-help";
 import { ChoiceField, FieldGrid, FieldGroup, MoreMeasurements, MoreSection, NumField, unitFor, useGlossary, useUnits, YesNoField } from "./field-parts";
 import { HitchHardwareFields, TrailerPlateFields, VehicleTyreFields } from "./hardware-fields";

@@ -2,7 +2,10 @@
  * The workbench's form model: what react-hook-form holds, how typed text becomes a number, and how the held
  * values become a rig the schema can parse. Pure functions, no React, so the tests and the form share them.
  */
-import { convertRig, FIELD_RANGES, KG_PER_LB, MM_PER_IN, type RigInput, type UnitSystem } from "@/lib/towing";
+import type { RigInput } from "@/lib/towing";
+import { convertRig } from "@/lib/towing/convert-rig";
+import { FIELD_KINDS } from "@/lib/towing/field-kinds";
+import { KG_PER_LB, MM_PER_IN, type UnitSystem } from "@/lib/towing/units";
 import { formatNumber } from "@/lib/format";
 
 type DeepPartial<T> = { [K in keyof T]?: NonNullable<T[K]> extends object ? DeepPartial<NonNullable<T[K]>> : T[K] };
@@ -133,7 +136,7 @@ function roundTree(node: Plain, prefix: string, units: UnitSystem): Plain {
   for (const [key, value] of Object.entries(node)) {
     const path = prefix ? `${prefix}.${key}` : key;
     if (typeof value === "number" && Number.isFinite(value)) {
-      const kind = FIELD_RANGES[path]?.kind;
+      const kind = FIELD_KINDS[path];
       const unit = kind === "mass" ? (units === "metric" ? "kg" : "lb") : kind === "length" ? (units === "metric" ? "mm" : "in") : "%";
       out[key] = kind ? roundForEntry(value, unit) : value;
     } else if (typeof value === "number") {

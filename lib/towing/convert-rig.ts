@@ -1,19 +1,19 @@
 /**
- * Convert a whole rig between unit systems, field by field, using the kinds declared in the schema
- * (FIELD_RANGES) and the factors of the units module. Formatting-free: values stay unrounded.
+ * Convert a whole rig between unit systems, field by field, using the fields' kinds (field-kinds.ts, held
+ * equal to the schema's) and the factors of the units module. Formatting-free: values stay unrounded.
  */
-import { FIELD_RANGES, type RigInput } from "./input";
+import { FIELD_KINDS } from "./field-kinds";
+import type { RigInput } from "./input";
 import { factor, type UnitSystem } from "./units";
 
 type Plain = Record<string, unknown>;
-/** For each key: "mass", "length", or a nested spec for a nested object. Built once from FIELD_RANGES. */
+/** For each key: "mass", "length", or a nested spec for a nested object. Built once from FIELD_KINDS. */
 interface Spec {
   [key: string]: "mass" | "length" | Spec;
 }
 
 const SPEC: Spec = {};
-for (const [path, range] of Object.entries(FIELD_RANGES)) {
-  if (range.kind !== "mass" && range.kind !== "length") continue;
+for (const [path, kind] of Object.entries(FIELD_KINDS)) {
   const keys = path.split(".");
   let node = SPEC;
   for (let i = 0; i < keys.length - 1; i++) {
@@ -22,7 +22,7 @@ for (const [path, range] of Object.entries(FIELD_RANGES)) {
     if (typeof next === "object") node = next;
     else node = node[k] = {};
   }
-  node[keys[keys.length - 1]!] = range.kind;
+  node[keys[keys.length - 1]!] = kind;
 }
 
 function convertNode(node: Plain, spec: Spec, mass: number, length: number): Plain {

@@ -13,7 +13,10 @@ import { US_CA_RULES } from "./sets/us-california";
 import { US_FL_RULES } from "./sets/us-florida";
 import { US_OTHER_RULES } from "./sets/us-other";
 import { US_TX_RULES } from "./sets/us-texas";
+import { BY_CODE, COUNTRIES, placeLabel, ruleSetIdFor } from "./place-list";
 import type { Place, RuleSet } from "./types";
+
+export { COUNTRIES, placeLabel };
 
 /** Every rule set, by id. */
 export const RULE_SETS: Readonly<Record<string, RuleSet>> = {
@@ -28,80 +31,6 @@ export const RULE_SETS: Readonly<Record<string, RuleSet>> = {
   [EU_RULES.id]: EU_RULES,
   [AU_RULES.id]: AU_RULES,
 };
-
-interface Region {
-  code: string;
-  name: string;
-  ruleSet: string;
-}
-interface Country {
-  code: string;
-  name: string;
-  /** What a region is called there, for the form's label. */
-  regionWord?: string;
-  /** The rule set when no region is chosen (or the country has none). */
-  ruleSet: string;
-  regions: Region[];
-}
-
-const au = (code: string, name: string): Region => ({ code, name, ruleSet: "au" });
-
-/** The countries and regions, in the order the settings form lists them. Codes follow ISO 3166 ("EU" for the Union). */
-export const COUNTRIES: readonly Country[] = [
-  {
-    code: "US",
-    name: "United States",
-    regionWord: "State",
-    ruleSet: "us-other",
-    regions: [
-      { code: "CA", name: "California", ruleSet: "us-ca" },
-      { code: "FL", name: "Florida", ruleSet: "us-fl" },
-      { code: "TX", name: "Texas", ruleSet: "us-tx" },
-      { code: "OTHER", name: "Another state", ruleSet: "us-other" },
-    ],
-  },
-  {
-    code: "CA",
-    name: "Canada",
-    regionWord: "Province or territory",
-    ruleSet: "ca-other",
-    regions: [
-      { code: "ON", name: "Ontario", ruleSet: "ca-on" },
-      { code: "OTHER", name: "Another province or territory", ruleSet: "ca-other" },
-    ],
-  },
-  {
-    code: "GB",
-    name: "United Kingdom",
-    regionWord: "Nation",
-    ruleSet: "gb",
-    regions: [
-      { code: "ENG", name: "England", ruleSet: "gb" },
-      { code: "SCT", name: "Scotland", ruleSet: "gb" },
-      { code: "WLS", name: "Wales", ruleSet: "gb" },
-      { code: "NIR", name: "Northern Ireland", ruleSet: "gb-nir" },
-    ],
-  },
-  { code: "EU", name: "European Union", ruleSet: "eu", regions: [] },
-  {
-    code: "AU",
-    name: "Australia",
-    regionWord: "State or territory",
-    ruleSet: "au",
-    regions: [
-      au("NSW", "New South Wales"),
-      au("VIC", "Victoria"),
-      au("QLD", "Queensland"),
-      au("WA", "Western Australia"),
-      au("SA", "South Australia"),
-      au("TAS", "Tasmania"),
-      au("ACT", "Australian Capital Territory"),
-      au("NT", "Northern Territory"),
-    ],
-  },
-];
-
-const BY_CODE = new Map(COUNTRIES.map((c) => [c.code, c]));
 
 /** A place as typed or stored; the region must belong to the country. */
 export const placeSchema = z
@@ -119,19 +48,8 @@ export const placeSchema = z
 
 /** The rule set for a place, or undefined for a place the product does not know. */
 export function ruleSetFor(place: Place): RuleSet | undefined {
-  const country = BY_CODE.get(place.country);
-  if (!country) return undefined;
-  const region = place.region ? country.regions.find((r) => r.code === place.region) : undefined;
-  if (place.region && !region) return undefined;
-  return RULE_SETS[region?.ruleSet ?? country.ruleSet];
-}
-
-/** "Texas, United States", "Great Britain: Wales", "European Union". */
-export function placeLabel(place: Place): string {
-  const country = BY_CODE.get(place.country);
-  if (!country) return place.country;
-  const region = place.region ? country.regions.find((r) => r.code === place.region) : undefined;
-  return region ? `${region.name}, ${country.name}` : country.name;
+  const id = ruleSetIdFor(place);
+  return id ? RULE_SETS[id] : undefined;
 }
 
 /** A place from stored columns (an organisation's setting), or undefined when none is set or it is unknown. */
