@@ -141,6 +141,25 @@ describe("who may save, share and read", () => {
   });
 });
 
+describe("the saved-check filter keeps a set-up to adjust apart from a rating exceeded", () => {
+  it("lists a ball mount that needs another drop under adjust, and an over-heavy trailer under over", async () => {
+    await actAs("staffA");
+    // The camper with a ball mount 4 in deeper than its own 3 in: the trailer sits 4 in nose-down, every rating
+    // still holds (geometry: the ball-mount check's level band; the camper fixture reads within as saved).
+    const deeper = await saveCheckAction({ rig: { ...camper, ballMount: { ...camper.ballMount, drop: 7 } }, customerName: "Filter Adjust" });
+    // The camper at 15,000 lb: above both of the hitch's gross trailer weight ratings (6,000 lb, and 10,000 lb
+    // with weight distribution), so over (Source: WAC 204-70-060, the lowest rating governs).
+    const heavy = await saveCheckAction({ rig: { ...camper, trailer: { ...camper.trailer, grossTrailerWeight: 15000 } }, customerName: "Filter Over" });
+    expect(deeper.ok && heavy.ok).toBe(true);
+    const list = async (query: string) =>
+      (await (await listChecksRoute(new Request(`http://t/api/v1/checks?customer=filter&${query}`))).json()) as { total: number; rows: Array<{ customerName: string; level: string }> };
+    const adjust = await list("level=adjust");
+    expect(adjust.rows.map((i) => [i.customerName, i.level])).toEqual([["Filter Adjust", "adjust"]]);
+    const over = await list("level=over");
+    expect(over.rows.map((i) => [i.customerName, i.level])).toEqual([["Filter Over", "over"]]);
+  });
+});
+
 describe("the customer's link", () => {
   it("opens the snapshot and the shop's name, and nothing once withdrawn", async () => {
     const open = await resolveShareToken(tokenOfA);

@@ -1,4 +1,4 @@
-import { rmSync } from "node:fs";
+import { readFileSync, rmSync } from "node:fs";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 
 vi.hoisted(() => {
@@ -360,6 +360,45 @@ describe("the pairing matrix at 500 × 200", () => {
     const c = cached.body.counts!;
     expect(c.within + c.tight + c.adjust + c.over + c.incomplete).toBe(10 * 200);
     for (const row of cached.body.rows) expect(row.cells.every((cell) => cell === null || cell.level === "within")).toBe(true);
+  });
+});
+
+describe("the pairing matrix keeps a set-up to adjust apart from a rating exceeded", () => {
+  // The camper-on-pickup fixture as a vehicle and two trailers: one on a ball mount 4 in deeper than its own
+  // (the trailer sits nose-down: another drop, every rating holds), one loaded to 15,000 lb (above both of the
+  // hitch's gross trailer weight ratings, 6,000 lb and 10,000 lb with weight distribution: over; Source:
+  // WAC 204-70-060, the lowest rating governs).
+  const camper = JSON.parse(readFileSync("tests/fixtures/rigs/camper-on-pickup.json", "utf8"));
+  beforeAll(async () => {
+    const db = await getDb();
+    await db.insert(vehicleProfiles).values({
+      id: "pv-adjust",
+      organisationId: "org-a",
+      name: "Setup pickup",
+      units: camper.units,
+      data: { units: camper.units, vehicle: camper.vehicle, hitch: camper.hitch, load: camper.load },
+    });
+    const trailerPart = (extra: object) => ({ units: camper.units, trailer: camper.trailer, ballMount: camper.ballMount, weightDistribution: camper.weightDistribution, ...extra });
+    await db.insert(trailerProfiles).values([
+      { id: "pt-deep", organisationId: "org-a", name: "Setup camper deep", units: camper.units, data: trailerPart({ ballMount: { ...camper.ballMount, drop: 7 } }) },
+      { id: "pt-heavy", organisationId: "org-a", name: "Setup camper heavy", units: camper.units, data: trailerPart({ trailer: { ...camper.trailer, grossTrailerWeight: 15000 } }) },
+    ]);
+  });
+
+  it("reads the deeper ball mount as adjust with the ball mount named, the heavy camper as over, and filters them apart", async () => {
+    await actAs("fleetA");
+    type Cell = { level: string; adjust?: string[] } | null;
+    type Page = { rows: Array<{ name: string; cells: Cell[] }>; columns: Array<{ name: string }> };
+    const get = async (query = "") =>
+      (await (await matrixRoute(new Request(`http://t/api/v1/fleet/matrix?vehicle=Setup%20pickup&hitched=Setup%20camper${query}`))).json()) as Page;
+    const page = await get();
+    const cellOf = (p: Page, column: string) => p.rows[0]!.cells[p.columns.findIndex((c) => c.name === column)];
+    expect(cellOf(page, "Setup camper deep")).toMatchObject({ level: "adjust", adjust: ["ball-mount"] });
+    expect(cellOf(page, "Setup camper heavy")).toMatchObject({ level: "over" });
+    const adjustOnly = await get("&level=adjust");
+    expect(adjustOnly.rows[0]!.cells.filter(Boolean).map((c) => c!.level)).toEqual(["adjust"]);
+    const overOnly = await get("&level=over");
+    expect(overOnly.rows[0]!.cells.filter(Boolean).map((c) => c!.level)).toEqual(["over"]);
   });
 });
 

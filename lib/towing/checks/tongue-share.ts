@@ -15,7 +15,7 @@ const CAUTIONS = [
 
 /** Said for a fifth wheel or gooseneck: its band, and where the vehicle's own figures come in. */
 const BED_BAND_CAUTION =
-  "A fifth wheel or gooseneck puts 15 to 25 % of the trailer on the pin (GM owner's manual); a tongue-weight band entered for the vehicle is for a receiver and is not used here. Where the vehicle's manual gives its own pin-weight figures, they win.";
+  "A fifth wheel or gooseneck puts 15 to 25 % of the trailer on the pin, as vehicle makers' owner's manuals give it; a tongue-weight band entered for the vehicle is for a receiver and is not used here. Where the vehicle's manual gives its own pin-weight figures, they win.";
 
 export function checkTongueShare(d: Derived, c: Ctx): TongueShareResult | null {
   if (!d.hasTrailer) return null;
