@@ -7,7 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { mkdirSync } from "node:fs";
 import type { Page } from "playwright-core";
 import { waitForHydration } from "./support/csp";
-import { openBrowser, pickExample, screenshot, signIn } from "./support/browser";
+import { openBrowser, pickExample, screenshot, startSession } from "./support/browser";
 
 type Session = Awaited<ReturnType<typeof openBrowser>>;
 
@@ -35,7 +35,7 @@ describe("the short counter form on a desktop", () => {
   let staff: Session;
   beforeAll(async () => {
     staff = await openBrowser(WIDE);
-    await signIn(staff.page, ACCOUNT);
+    await startSession(staff.page, ACCOUNT);
   });
   afterAll(async () => {
     await staff.close();
@@ -225,7 +225,7 @@ describe("the short counter form on a phone", () => {
   let phone: Session;
   beforeAll(async () => {
     phone = await openBrowser(PHONE_TALL);
-    await signIn(phone.page, ACCOUNT);
+    await startSession(phone.page, ACCOUNT);
   });
   afterAll(async () => {
     await phone.close();

@@ -1,6 +1,6 @@
 import type { ConsoleMessage } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { openBrowser, pickProfile, screenshot, signIn } from "./support/browser";
+import { openBrowser, pickProfile, screenshot, startSession } from "./support/browser";
 import { waitForHydration } from "./support/csp";
 
 type Session = Awaited<ReturnType<typeof openBrowser>>;
@@ -21,7 +21,7 @@ describe("the check screen on a 390 px phone", () => {
       if (message.type() === "warning" || message.type() === "error") messages.push(`${message.type()}: ${message.text()}`);
     });
     session.page.on("pageerror", (error) => messages.push(`page error: ${error.message}`));
-    await signIn(session.page, "owner@quillfield.example.com");
+    await startSession(session.page, "owner@quillfield.example.com");
   });
   afterAll(async () => session.close());
 
