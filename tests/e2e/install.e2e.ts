@@ -45,7 +45,11 @@ describe("an installation: fitted from a fleet vehicle, measured, ticked, handed
   it("starts a record from the vehicle's page, measures, ticks the checklist and saves it fitted", async () => {
     const { page } = installer;
     await page.goto("/fleet/vehicles");
-    await page.getByRole("link", { name: "Stellmark Wendle SUV" }).click();
+    // Open the vehicle by its link's address: a click while the list is still being drawn can land on a row
+    // that is replaced the next moment, and the page would never change.
+    const vehicleLink = page.getByRole("link", { name: "Stellmark Wendle SUV" });
+    await vehicleLink.waitFor();
+    await page.goto((await vehicleLink.getAttribute("href"))!);
     await page.getByRole("heading", { name: "Installation records" }).waitFor();
     await page.getByRole("link", { name: "Record an installation" }).click();
     await page.getByRole("heading", { name: "New installation" }).waitFor();
