@@ -1,5 +1,5 @@
 import { sql } from "drizzle-orm";
-import { customType, index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
+import { customType, index, integer, primaryKey, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
 import { deflateRawSync, inflateRawSync } from "node:zlib";
 import { ROLES } from "../lib/roles";
 
@@ -470,3 +470,44 @@ export const rateLimits = sqliteTable(
   },
   (table) => [index("rate_limits_reset_at_idx").on(table.resetAt)],
 );
+
+/**
+ * Each pair's verdict as the pairing matrix shows it (lib/server/pair-verdicts.ts), kept so that a verdict
+ * filter over every pair of a large fleet is a query. `inputs` stamps what the verdict was worked from (the
+ * core version, the organisation's thresholds and units, and both profiles' last change); a pair whose stamp
+ * differs is worked out again in the background.
+ */
+export const pairVerdicts = sqliteTable(
+  "pair_verdicts",
+  {
+    organisationId: text("organisation_id")
+      .notNull()
+      .references(() => organisations.id, { onDelete: "cascade" }),
+    vehicleId: text("vehicle_id").notNull(),
+    /** A trailer's or an accessory's profile id (ids are unique across the two). */
+    hitchedId: text("hitched_id").notNull(),
+    level: text("level", { enum: ["within", "tight", "adjust", "over", "incomplete"] }).notNull(),
+    /** The matrix cell (lib/fleet/matrix.ts `MatrixCell`) as JSON. */
+    cell: text("cell").notNull(),
+    inputs: text("inputs").notNull(),
+  },
+  (table) => [
+    primaryKey({ columns: [table.organisationId, table.vehicleId, table.hitchedId] }),
+    index("pair_verdicts_level_idx").on(table.organisationId, table.level, table.vehicleId, table.hitchedId),
+  ],
+);
+
+/**
+ * Where an organisation's stored pair verdicts stand: `fingerprint` names the fleet they were (or are being)
+ * worked out for; `status` is "ready" or "rechecking". A recheck holds `claim` and renews `claimedAt` as it
+ * goes; a claim left older than half a minute (its process ended) may be taken by another process.
+ */
+export const pairRechecks = sqliteTable("pair_rechecks", {
+  organisationId: text("organisation_id")
+    .primaryKey()
+    .references(() => organisations.id, { onDelete: "cascade" }),
+  fingerprint: text("fingerprint").notNull(),
+  status: text("status", { enum: ["ready", "rechecking"] }).notNull(),
+  claim: text("claim"),
+  claimedAt: integer("claimed_at"),
+});

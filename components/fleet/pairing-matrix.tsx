@@ -154,7 +154,12 @@ export function PairingMatrix({ initial, initialKey, initialFilters, cautions }:
   const [page, setPage] = useState(1);
   const [colPage, setColPage] = useState(1);
   const key = fleetMatrixKey({ ...filters, page, pageSize: PAGE_SIZE, colPage, colPageSize: COL_PAGE_SIZE });
-  const { data, error, isLoading } = useSWR(key, fetchJson<MatrixPage>, { fallback: { [initialKey]: initial }, keepPreviousData: true });
+  // While a large fleet's stored verdicts are being rechecked, the page asks again every two seconds.
+  const { data, error, isLoading } = useSWR(key, fetchJson<MatrixPage>, {
+    fallback: { [initialKey]: initial },
+    keepPreviousData: true,
+    refreshInterval: (latest) => (latest?.rechecking ? 2000 : 0),
+  });
 
   const setFilter = (name: keyof typeof filters, value: string) => setFilterSet({ [name]: value });
   const setFilterSet = (values: Partial<PairingMatrixFilters>) => {
@@ -216,6 +221,12 @@ export function PairingMatrix({ initial, initialKey, initialFilters, cautions }:
         </form>
       </Card>
       {error ? <p role="alert" className="text-sm text-over">{(error as Error).message}</p> : null}
+      {data?.rechecking ? (
+        <p role="status" className="rounded-md border border-rule bg-sunken px-3 py-2 text-sm text-ink-soft" data-testid="pairings-rechecking">
+          Being rechecked after a change to a profile or the thresholds. Every verdict shown is worked out for the
+          profiles as they stand now; the counts and the verdict filter follow in a moment.
+        </p>
+      ) : null}
       {data?.counts ? (
         <p className="flex flex-wrap items-center gap-2 text-sm text-ink-soft" aria-live="polite">
           <VerdictBadge status="within" size="sm" label={`${data.counts.within} within`} />
@@ -265,7 +276,7 @@ export function PairingMatrix({ initial, initialKey, initialFilters, cautions }:
               {data && data.rows.length === 0 ? (
                 <tr>
                   <td colSpan={1 + data.columns.length} className="px-3 py-8 text-left text-ink-soft sm:text-center">
-                    No pairings match. Clear a filter, or add vehicles and trailers.
+                    {data.rechecking && filters.level ? "The verdict filter is waiting for the recheck to finish." : "No pairings match. Clear a filter, or add vehicles and trailers."}
                   </td>
                 </tr>
               ) : null}

@@ -71,7 +71,7 @@ export async function FleetAtAGlance({ access }: { access: AccessContext }) {
             ))}
           </ul>
         ) : (
-          <p className="text-sm text-ink-soft">The pairings are still being worked out for a fleet this size: open them to see each page.</p>
+          <p className="text-sm text-ink-soft">The pairings are being rechecked after a change: the counts follow in a moment. Open them to see each page.</p>
         )}
         <div className="mt-4 flex flex-wrap gap-3">
           <Link href="/fleet/matrix" className={buttonClasses({ variant: "primary", size: "sm" })}>

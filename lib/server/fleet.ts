@@ -1,4 +1,5 @@
 import "server-only";
+import { createHash } from "node:crypto";
 import { and, asc, desc, eq, isNotNull, isNull, ne, sql, type SQL } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { accessoryProfiles, savedChecks, trailerProfiles, vehicleProfiles } from "@/db/schema";
@@ -7,6 +8,7 @@ import { KIND_WORDS, SECTIONS_BY_KIND, type ProfileKind } from "@/lib/fleet/fiel
 import { can, type Permission } from "@/lib/roles";
 import { evaluatePair, hitchedWeight, profilePart, vehicleCapacity, type HitchedWeight, type MatrixCell, type VehicleCapacity } from "@/lib/fleet/matrix";
 import type { RigInput } from "@/lib/towing/input";
+import { CORE_VERSION } from "@/lib/towing/version";
 import type { VerdictLevel } from "@/lib/towing/types";
 import type { UnitSystem } from "@/lib/towing/units";
 import type { ImportOptions, MatrixHitchedSort, MatrixQuery, MatrixVehicleSort, ProfileInput } from "@/lib/validation/fleet";
@@ -14,6 +16,7 @@ import type { AccessContext } from "./access";
 import { figureSourcesByVehicle } from "./installations";
 import { AccessDenied } from "./access-denied";
 import { newId } from "./tokens";
+import { pairKey, recheckPairs, recheckPairsSoon, storedCells, storedCounts, storedVerdictsReady, storedWithLevel, type PairScope, type PairSource } from "./pair-verdicts";
 
 function assertCan(access: AccessContext, permission: Permission) {
   if (!can(access.role, permission)) throw new AccessDenied(permission);
@@ -107,10 +110,12 @@ export async function saveFleetProfile(access: AccessContext, kind: ProfileKind,
       .update(table)
       .set({ name: input.name, units: input.units, data, updatedAt: new Date() })
       .where(and(eq(table.id, id), eq(table.organisationId, organisationId)));
+    recheckAfterChange(access);
     return { ok: true, id };
   }
   const newProfileId = newId();
   await db.insert(table).values({ id: newProfileId, organisationId, name: input.name, units: input.units, data });
+  recheckAfterChange(access);
   return { ok: true, id: newProfileId };
 }
 
@@ -124,6 +129,7 @@ export async function setProfileArchived(access: AccessContext, kind: ProfileKin
     .set({ archivedAt: archived ? new Date() : null, updatedAt: new Date() })
     .where(and(eq(table.id, id), eq(table.organisationId, access.organisation.id)))
     .returning({ id: table.id });
+  if (result.length > 0) recheckAfterChange(access);
   return result.length > 0;
 }
 
@@ -164,6 +170,7 @@ export async function importFleetProfiles(access: AccessContext, text: string, o
     // SQLite limits the bound values of one statement; 100 rows of 7 columns stay well inside it.
     for (let i = 0; i < values.length; i += 100) await tx.insert(table).values(values.slice(i, i + 100));
   });
+  recheckAfterChange(access);
   return { ...parsed, imported: values.length, outcome: "imported" };
 }
 
@@ -233,24 +240,30 @@ export interface MatrixPage {
   colPage: number;
   colPageCount: number;
   totalColumns: number;
-  /** Pairs by verdict among the filtered vehicles and trailers; null when only the page was evaluated. */
+  /** Pairs by verdict among the filtered vehicles and trailers; null while the stored verdicts are being rechecked. */
   counts: Record<VerdictLevel, number> | null;
+  /**
+   * True while a large fleet's stored verdicts are being rechecked after a change: the page's own cells are
+   * current (worked out for this answer), the counts are null and a verdict filter matches nothing yet.
+   */
+  rechecking: boolean;
   evaluated: number;
   elapsedMs: number;
 }
 
 interface Prepared {
-  vehicles: Array<{ id: string; name: string; capacity?: VehicleCapacity; part: Partial<RigInput> }>;
-  hitched: Array<MatrixColumn & { part: Partial<RigInput> }>;
+  vehicles: Array<{ id: string; name: string; updatedAt: number; capacity?: VehicleCapacity; part: Partial<RigInput> }>;
+  hitched: Array<MatrixColumn & { updatedAt: number; part: Partial<RigInput> }>;
 }
 
 interface MatrixCacheEntry {
+  /** The fleet as it stands (a hash): the stored pair verdicts are current when they were worked out for it. */
   fingerprint: string;
+  /** The core version, units and thresholds, part of every stored pair's stamp. */
+  settings: string;
   prepared: Prepared;
-  /** Every pair's result, once computed: index row * columns + column. */
+  /** A small fleet's every pair, worked out here when the stored verdicts are being rechecked by another process. */
   cells?: MatrixCell[];
-  /** The full evaluation under way, shared by every request that needs it. */
-  computing?: Promise<MatrixCell[]>;
   /** Row and column indexes in each order asked for so far. */
   orders: Map<string, number[]>;
 }
@@ -268,20 +281,24 @@ async function prepareMatrix(access: AccessContext): Promise<MatrixCacheEntry> {
     listFleetProfiles(access, "trailers"),
     listFleetProfiles(access, "accessories"),
   ]);
-  const fingerprint = [units, access.organisation.tightMarginRatio, access.organisation.frontAxleLossRatio, ...[vehicles, trailers, accessories].flatMap((list) => list.map((p) => `${p.id}:${p.updatedAt}`))].join("|");
+  const settings = [CORE_VERSION, units, access.organisation.tightMarginRatio, access.organisation.frontAxleLossRatio].join("|");
+  const fingerprint = createHash("sha256")
+    .update([settings, ...[vehicles, trailers, accessories].map((list) => list.map((p) => `${p.id}:${p.updatedAt}`).join(","))].join("|"))
+    .digest("base64url");
   const key = access.organisation.id;
   const cached = matrixCache.get(key);
   if (cached && cached.fingerprint === fingerprint) return cached;
   const vehicle = (p: FleetProfile) => {
     const part = partOf(p, units);
-    return { id: p.id, name: p.name, capacity: vehicleCapacity(units, part), part };
+    return { id: p.id, name: p.name, updatedAt: p.updatedAt, capacity: vehicleCapacity(units, part), part };
   };
   const hitchedOf = (kind: MatrixColumn["kind"]) => (p: FleetProfile) => {
     const part = partOf(p, units);
-    return { id: p.id, kind, name: p.name, weight: hitchedWeight(units, part), part };
+    return { id: p.id, kind, name: p.name, updatedAt: p.updatedAt, weight: hitchedWeight(units, part), part };
   };
   const entry: MatrixCacheEntry = {
     fingerprint,
+    settings,
     prepared: {
       vehicles: vehicles.map(vehicle),
       hitched: [...trailers.map(hitchedOf("trailers")), ...accessories.map(hitchedOf("accessories"))],
@@ -294,23 +311,26 @@ async function prepareMatrix(access: AccessContext): Promise<MatrixCacheEntry> {
   return entry;
 }
 
-/** Every pair of the fleet, evaluated once per change of any profile; yields between slices of vehicles. */
-function evaluateAll(entry: MatrixCacheEntry, units: UnitSystem, ratio: number, frontLoss: number): Promise<MatrixCell[]> {
-  if (entry.cells) return Promise.resolve(entry.cells);
-  entry.computing ??= (async () => {
-    const { vehicles, hitched } = entry.prepared;
-    const width = hitched.length;
-    const cells = new Array<MatrixCell>(vehicles.length * width);
-    const slice = Math.max(1, Math.floor(5_000 / Math.max(1, width)));
-    for (let r = 0; r < vehicles.length; r++) {
-      for (let c = 0; c < width; c++) cells[r * width + c] = evaluatePair(units, vehicles[r]!.part, hitched[c]!.part, ratio, frontLoss);
-      if (r % slice === slice - 1) await new Promise((resolve) => setImmediate(resolve));
-    }
-    entry.cells = cells;
-    entry.computing = undefined;
-    return cells;
-  })();
-  return entry.computing;
+/** What a recheck of the stored pair verdicts works from: the fleet as it stands now. */
+function pairSourceOf(access: AccessContext): () => Promise<PairSource> {
+  return async () => {
+    const entry = await prepareMatrix(access);
+    return {
+      organisationId: access.organisation.id,
+      fingerprint: entry.fingerprint,
+      settings: entry.settings,
+      units: access.organisation.units,
+      tightMarginRatio: access.organisation.tightMarginRatio,
+      frontAxleLossRatio: access.organisation.frontAxleLossRatio,
+      vehicles: entry.prepared.vehicles,
+      hitched: entry.prepared.hitched,
+    };
+  };
+}
+
+/** After a profile changes: the stored pair verdicts are worked out again in the background. */
+function recheckAfterChange(access: AccessContext) {
+  recheckPairsSoon(access.organisation.id, pairSourceOf(access));
 }
 
 /**
@@ -337,14 +357,22 @@ function orderOf(entry: MatrixCacheEntry, axis: "rows" | "columns", sort: Matrix
   return indexes;
 }
 
-/** Above this many pairs, an unfiltered page evaluates only its own cells (the rest on demand). */
-const FULL_EVALUATION_LIMIT = 20_000;
+/**
+ * Up to this many pairs, a request waits for the stored verdicts to be brought up to date (a few tens of
+ * milliseconds); a larger fleet's page answers at once while they are rechecked in the background.
+ */
+const WAIT_FOR_RECHECK_LIMIT = 5_000;
 
 /**
- * Every vehicle against every trailer and accessory, with the core's `evaluateRigFast`. Filters by name and by
- * verdict; sorts vehicles by name or capacity and trailers and accessories by name or weight, then pages over
- * vehicles (rows) and over trailers and accessories (columns), so an order holds across pages. A verdict
- * filter needs every pair: the full result is kept per organisation until a profile changes.
+ * Every vehicle against every trailer and accessory. Filters by name and by verdict; sorts vehicles by name
+ * or capacity and trailers and accessories by name or weight, then pages over vehicles (rows) and over
+ * trailers and accessories (columns), so an order holds across pages.
+ *
+ * The verdicts come from `pair_verdicts` (lib/server/pair-verdicts.ts) when they are current, so the counts
+ * and a verdict filter over every pair are queries. After a change to a profile, the thresholds or the core,
+ * a large fleet's stored verdicts are rechecked in the background: meanwhile the page's own cells are worked
+ * out as it is asked for, and the counts and a verdict filter answer "being rechecked" (`rechecking`) rather
+ * than from verdicts that may no longer hold.
  */
 export async function fleetMatrix(
   access: AccessContext,
@@ -353,6 +381,7 @@ export async function fleetMatrix(
   assertCan(access, "fleet.read");
   const query: MatrixQuery = { ...asked, vehicleSort: asked.vehicleSort ?? "name", hitchedSort: asked.hitchedSort ?? "name" };
   const started = performance.now();
+  const organisationId = access.organisation.id;
   const entry = await prepareMatrix(access);
   const { vehicles, hitched } = entry.prepared;
   const units = access.organisation.units;
@@ -366,16 +395,36 @@ export async function fleetMatrix(
   let colIndexes = orderOf(entry, "columns", query.hitchedSort).filter((i) => !hitchedNeedle || hitched[i]!.name.toLowerCase().includes(hitchedNeedle));
 
   let evaluated = 0;
-  const full = Boolean(entry.cells) || Boolean(query.level) || vehicles.length * width <= FULL_EVALUATION_LIMIT;
-  if (full && !entry.cells) {
-    evaluated = (await evaluateAll(entry, units, ratio, frontLoss)).length;
-  } else if (!entry.cells) {
-    // A large fleet's first page answers at once; the rest is worked out in the background, in slices that
-    // leave the server free, so a verdict filter or the counts are ready soon after.
-    void evaluateAll(entry, units, ratio, frontLoss).catch(() => undefined);
+  const small = vehicles.length * width <= WAIT_FOR_RECHECK_LIMIT;
+  let stored = await storedVerdictsReady(organisationId, entry.fingerprint);
+  if (!stored) {
+    const recheck = recheckPairs(organisationId, pairSourceOf(access));
+    if (small) {
+      stored = (await recheck) === "done" && (await storedVerdictsReady(organisationId, entry.fingerprint));
+    } else {
+      recheck.catch((error: unknown) => console.error("pair verdicts: recheck failed", error instanceof Error ? error.message : error));
+    }
   }
+  // A small fleet whose verdicts another process is rechecking: every pair worked out here, once per change.
+  if (!stored && small && !entry.cells) {
+    entry.cells = vehicles.flatMap((v) => hitched.map((h) => evaluatePair(units, v.part, h.part, ratio, frontLoss)));
+    evaluated = entry.cells.length;
+  }
+  const scope: PairScope = {
+    organisationId,
+    ...(vehicleNeedle ? { vehicleIds: rowIndexes.map((r) => vehicles[r]!.id) } : {}),
+    ...(hitchedNeedle ? { hitchedIds: colIndexes.map((c) => hitched[c]!.id) } : {}),
+  };
+
   let counts: MatrixPage["counts"] = null;
-  if (entry.cells) {
+  if (stored) {
+    counts = await storedCounts(scope);
+    if (query.level) {
+      const withLevel = await storedWithLevel(scope, query.level);
+      rowIndexes = rowIndexes.filter((r) => withLevel.vehicleIds.has(vehicles[r]!.id));
+      colIndexes = colIndexes.filter((c) => withLevel.hitchedIds.has(hitched[c]!.id));
+    }
+  } else if (entry.cells) {
     const cells = entry.cells;
     counts = { within: 0, tight: 0, adjust: 0, over: 0, incomplete: 0 };
     for (const r of rowIndexes) for (const c of colIndexes) counts[cells[r * width + c]!.level]++;
@@ -395,6 +444,12 @@ export async function fleetMatrix(
       colIndexes = colIndexes.filter((c) => colsWith.has(c));
     }
   }
+  // Being rechecked: a verdict filter cannot be answered yet (the page says so and asks again shortly).
+  const rechecking = !stored && !entry.cells;
+  if (rechecking && query.level) {
+    rowIndexes = [];
+    colIndexes = [];
+  }
 
   const pageCount = Math.max(1, Math.ceil(rowIndexes.length / query.pageSize));
   const page = Math.min(query.page, pageCount);
@@ -402,13 +457,20 @@ export async function fleetMatrix(
   const colPage = Math.min(query.colPage, colPageCount);
   const pageRows = rowIndexes.slice((page - 1) * query.pageSize, page * query.pageSize);
   const pageCols = colIndexes.slice((colPage - 1) * query.colPageSize, colPage * query.colPageSize);
+  const pageCells = stored
+    ? await storedCells(
+        organisationId,
+        pageRows.map((r) => vehicles[r]!.id),
+        pageCols.map((c) => hitched[c]!.id),
+      )
+    : undefined;
 
   const rows: MatrixRow[] = pageRows.map((r) => ({
     id: vehicles[r]!.id,
     name: vehicles[r]!.name,
     ...(vehicles[r]!.capacity ? { capacity: vehicles[r]!.capacity } : {}),
     cells: pageCols.map((c) => {
-      let cell = entry.cells?.[r * width + c];
+      let cell = pageCells?.get(pairKey(vehicles[r]!.id, hitched[c]!.id)) ?? entry.cells?.[r * width + c];
       if (!cell) {
         cell = evaluatePair(units, vehicles[r]!.part, hitched[c]!.part, ratio, frontLoss);
         evaluated++;
@@ -437,6 +499,7 @@ export async function fleetMatrix(
     colPageCount,
     totalColumns: colIndexes.length,
     counts,
+    rechecking,
     evaluated,
     elapsedMs: Math.round(performance.now() - started),
   };

@@ -3,13 +3,14 @@ import { databaseHandle, getDb } from "@/db/client";
 /**
  * Every row of every table, as one comparable string: a refused request must leave it exactly as it was.
  * Sessions are left out (reading one renews it), and so are the rate-limit counters (a refused request is
- * still counted) and the migrations journal.
+ * still counted), the stored pair verdicts (worked out from the profiles, in the background after an earlier
+ * change) and the migrations journal.
  */
 export async function snapshotAll(): Promise<string> {
   await getDb();
   const { client } = databaseHandle();
   const tables = await client.execute(
-    "SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' AND name NOT LIKE '__drizzle%' AND name NOT IN ('sessions', 'rate_limits') ORDER BY name",
+    "SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' AND name NOT LIKE '__drizzle%' AND name NOT IN ('sessions', 'rate_limits', 'pair_verdicts', 'pair_rechecks') ORDER BY name",
   );
   const parts: Record<string, unknown[]> = {};
   for (const row of tables.rows) {
