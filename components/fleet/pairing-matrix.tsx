@@ -36,6 +36,9 @@ const HITCHED_ORDERS: Array<[MatrixHitchedSort, string]> = [
   ["weight-asc", "Weight, lightest first"],
 ];
 
+/** A count of pairs with its thousands marked (100,000 pairs is an ordinary fleet's grid). */
+const count = (n: number | undefined) => (n ?? 0).toLocaleString("en-US");
+
 /** The header's aria-sort for an order: by name reads A to Z, so ascending. */
 function ariaSort(sort: string, byName: boolean): "ascending" | "descending" | "none" {
   if (sort === "name") return byName ? "ascending" : "none";
@@ -229,11 +232,11 @@ export function PairingMatrix({ initial, initialKey, initialFilters, cautions }:
       ) : null}
       {data?.counts ? (
         <p className="flex flex-wrap items-center gap-2 text-sm text-ink-soft" aria-live="polite">
-          <VerdictBadge status="within" size="sm" label={`${data.counts.within} within`} />
-          <VerdictBadge status="tight" size="sm" label={`${data.counts.tight} tight`} />
-          <VerdictBadge status="adjust" size="sm" label={`${data.counts.adjust ?? 0} to adjust`} />
-          <VerdictBadge status="over" size="sm" label={`${data.counts.over} over`} />
-          <VerdictBadge status="incomplete" size="sm" label={`${data.counts.incomplete ?? 0} not confirmed`} />
+          <VerdictBadge status="within" size="sm" label={`${count(data.counts.within)} within`} />
+          <VerdictBadge status="tight" size="sm" label={`${count(data.counts.tight)} tight`} />
+          <VerdictBadge status="adjust" size="sm" label={`${count(data.counts.adjust)} to adjust`} />
+          <VerdictBadge status="over" size="sm" label={`${count(data.counts.over)} over`} />
+          <VerdictBadge status="incomplete" size="sm" label={`${count(data.counts.incomplete)} not confirmed`} />
         </p>
       ) : null}
       <Card>
