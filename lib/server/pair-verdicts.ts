@@ -229,10 +229,8 @@ export async function storedWithLevel(scope: PairScope, level: VerdictLevel): Pr
   if (scope.vehicleIds?.length === 0 || scope.hitchedIds?.length === 0) return { vehicleIds: new Set(), hitchedIds: new Set() };
   const db = await getDb();
   const where = scoped(scope, eq(pairVerdicts.level, level));
-  const [vehicles, hitched] = [
-    await db.selectDistinct({ id: pairVerdicts.vehicleId }).from(pairVerdicts).where(where),
-    await db.selectDistinct({ id: pairVerdicts.hitchedId }).from(pairVerdicts).where(where),
-  ];
+  const vehicles = await db.selectDistinct({ id: pairVerdicts.vehicleId }).from(pairVerdicts).where(where);
+  const hitched = await db.selectDistinct({ id: pairVerdicts.hitchedId }).from(pairVerdicts).where(where);
   return { vehicleIds: new Set(vehicles.map((row) => row.id)), hitchedIds: new Set(hitched.map((row) => row.id)) };
 }
 
