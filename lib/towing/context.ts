@@ -126,6 +126,23 @@ export function govW(c: Ctx, id: string, label: string, lb: number): Governing {
   return { id, label, value: weightOut(lb, c.u), unit: c.u.weight };
 }
 
+/**
+ * Keeps the tightest of a check's weight limits on its result: each actual weight against its limit becomes
+ * the result's actual, limit, margin and governing item when its margin ratio is the smallest so far.
+ */
+export function keepTightestWeight(c: Ctx, result: { actual?: Quantity; limit?: Quantity; margin?: Margin; governing?: Governing }) {
+  let best = Infinity;
+  return (id: string, label: string, actual: number, limit: number): void => {
+    const ratio = ratioOf(actual, limit);
+    if (!lessThan(ratio, best)) return;
+    best = ratio;
+    result.actual = qW(c, actual);
+    result.limit = qW(c, limit);
+    result.margin = marginW(c, actual, limit);
+    result.governing = govW(c, id, label, limit);
+  };
+}
+
 // ---- step inputs ----
 export function iW(c: Ctx, symbol: string, label: string, lb: number): StepInput {
   return { symbol, label, value: weightOut(lb, c.u), unit: c.u.weight };

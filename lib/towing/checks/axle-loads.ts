@@ -3,7 +3,7 @@
  * a vehicle with wheelbase WB lifts P·OH/WB off the front axle and puts P·(WB + OH)/WB on the rear axle.
  * Each axle is compared with its GAWR; the front axle with the larger of its unhitched and hitched loads.
  */
-import { fL, fP, fW, govW, iL, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
+import { fL, fP, fW, iL, iW, NO_STEPS, NO_TEXT, qW, rW, statusOf, withMissing, worst, type Ctx, keepTightestWeight } from "../context";
 import { needHitchLever, tongueWeightNote, type Derived, type DrivenAxles } from "../derive";
 import { TAKE_WEIGHT_OUT, wdRatingsState } from "../advice";
 import { need } from "../missing";
@@ -167,7 +167,7 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
       // The vehicle also drives unhitched, so the front axle answers for the larger of the two.
       const frontWorst = Math.max(aw.front, front, frontDriven);
       d.cache.axles = { front: frontWorst, rear: rearDriven, rearLightest, estimated: !!result.estimated, basis: awh ? "weighed" : "statics" };
-      let bestRatio = Infinity;
+      const keepTightest = keepTightestWeight(c, result);
       const axles: Array<[string, string, number, number | undefined]> = [
         ["vehicle.gawrRear", "Rear GAWR", rearDriven, v.gawrRear],
         ["vehicle.gawrFront", "Front GAWR", frontWorst, v.gawrFront],
@@ -183,14 +183,7 @@ export function checkAxleLoads(d: Derived, c: Ctx): AxleLoadsResult | null {
           if (!missing.some((m) => m.field.startsWith("weightDistribution."))) missing.push(need("weightDistribution.fenderWithWd"));
         }
         statuses.push(st);
-        const ratio = ratioOf(actual, limit);
-        if (lessThan(ratio, bestRatio)) {
-          bestRatio = ratio;
-          result.actual = qW(c, actual);
-          result.limit = qW(c, limit);
-          result.margin = marginW(c, actual, limit);
-          result.governing = govW(c, id, lab, limit);
-        }
+        keepTightest(id, lab, actual, limit);
       }
     }
   }

@@ -6,7 +6,7 @@
  * less what rests on the hitch, W_ax = GTW − TW. Weight distribution hands part of the hitch load back to the
  * trailer's axles (neglected by the statics: a caution says so). Either label exceeded is a rating: over.
  */
-import { fW, govW, iN, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
+import { fW, iN, iW, NO_STEPS, NO_TEXT, qW, rW, statusOf, withMissing, worst, type Ctx, keepTightestWeight } from "../context";
 import { needTongueWeight, tongueWeightNote, type Derived } from "../derive";
 import { need } from "../missing";
 import type { CheckStatus, MissingField, Step, TrailerLabelsResult } from "../types";
@@ -44,17 +44,10 @@ export function checkTrailerLabels(d: Derived, c: Ctx): TrailerLabelsResult | nu
   if (t.axleCount === undefined) missing.push(need("trailer.axleCount"));
   if (d.tw === undefined) missing.push(...needTongueWeight(d));
 
-  let best = Infinity;
+  const keepTightest = keepTightestWeight(c, result);
   const compare = (id: string, label: string, actual: number, limit: number) => {
     statuses.push(statusOf(actual, limit, c.tight));
-    const ratio = ratioOf(actual, limit);
-    if (lessThan(ratio, best)) {
-      best = ratio;
-      result.actual = qW(c, actual);
-      result.limit = qW(c, limit);
-      result.margin = marginW(c, actual, limit);
-      result.governing = govW(c, id, label, limit);
-    }
+    keepTightest(id, label, actual, limit);
   };
 
   const gtw = d.gtw;

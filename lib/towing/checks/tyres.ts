@@ -8,7 +8,7 @@
  * imbalance loads one tyre more). A tyre's maximum load is a rating: exceeded is over. Without the tyres'
  * figures the check says what to enter and is never within.
  */
-import { fW, govW, iN, iW, lessThan, marginW, NO_STEPS, NO_TEXT, qW, ratioOf, rW, statusOf, withMissing, worst, type Ctx } from "../context";
+import { fW, iN, iW, NO_STEPS, NO_TEXT, qW, rW, statusOf, withMissing, worst, type Ctx, keepTightestWeight } from "../context";
 import { needHitchLever, needTongueWeight, type Derived } from "../derive";
 import { need } from "../missing";
 import type { CheckStatus, MissingField, Step, TyresResult } from "../types";
@@ -41,19 +41,12 @@ export function checkTyres(d: Derived, c: Ctx): TyresResult | null {
     estimated: d.twEstimated || undefined,
     steps: NO_STEPS,
   };
-  let best = Infinity;
   const over: string[] = [];
+  const keepTightest = keepTightestWeight(c, result);
   const compare = (id: string, label: string, actual: number, limit: number, st = statusOf(actual, limit, c.tight)) => {
     statuses.push(st);
     if (st === "over") over.push(label);
-    const ratio = ratioOf(actual, limit);
-    if (lessThan(ratio, best)) {
-      best = ratio;
-      result.actual = qW(c, actual);
-      result.limit = qW(c, limit);
-      result.margin = marginW(c, actual, limit);
-      result.governing = govW(c, id, label, limit);
-    }
+    keepTightest(id, label, actual, limit);
   };
 
   // ---- the vehicle's tyres ----
