@@ -6,38 +6,65 @@
  * The .cpuprofile stays in the printed folder (open it in Chromium's DevTools, Performance tab).
  */
 import autocannon from "autocannon";
-import { mkdtempSync, readdirSync, readFileSync } from "node:fs";
+import { existsSync, mkdtempSync, readdirSync, readFileSync } from "node:fs";
+import { SourceMap } from "node:module";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { buildIfNeeded, seededDatabase, sessionCookieFor, startApp } from "../tests/load/support/app-server";
 
 interface ProfileNode {
   id: number;
-  callFrame: { functionName: string; url: string; lineNumber: number };
+  callFrame: { functionName: string; url: string; lineNumber: number; columnNumber: number };
   children?: number[];
 }
 interface Profile {
   nodes: ProfileNode[];
+  startTime: number;
   samples: number[];
   timeDeltas: number[];
 }
+
+/** V8 stamps samples on the monotonic clock that process.hrtime reads, in microseconds. */
+const nowUs = () => Number(process.hrtime.bigint() / 1000n);
 
 const route = process.argv[2] ?? "save";
 const requests = Number(process.env.PROFILE_REQUESTS ?? 3000);
 const rig = readFileSync("tests/fixtures/rigs/camper-on-pickup.json", "utf8");
 
-function where(url: string): string {
-  if (!url) return "(native, GC, idle)";
-  const modules = url.lastIndexOf("node_modules/");
-  if (modules >= 0) {
-    const rest = url.slice(modules + "node_modules/".length).split("/");
-    const name = rest[0]!.startsWith("@") ? `${rest[0]}/${rest[1]}` : rest[0]!;
-    // Next's server bundles hold React and the app's own code compiled in: name the chunk.
-    return name === "next" ? `next/${rest.slice(1, 4).join("/")}` : name;
+function packageOf(path: string): string | null {
+  const modules = path.lastIndexOf("node_modules/");
+  if (modules < 0) return null;
+  const rest = path.slice(modules + "node_modules/".length).split("/");
+  return rest[0]!.startsWith("@") ? `${rest[0]}/${rest[1]}` : rest[0]!;
+}
+
+/** The build's chunks carry source maps: a sample in a chunk is named by the file it was compiled from. */
+const sourceMaps = new Map<string, SourceMap | null>();
+function original(url: string, line: number, column: number): { source: string; line: number } | null {
+  if (!url.includes("/server/chunks/")) return null;
+  const path = url.startsWith("file://") ? new URL(url).pathname : url;
+  let map = sourceMaps.get(path);
+  if (map === undefined) {
+    map = existsSync(`${path}.map`) ? new SourceMap(JSON.parse(readFileSync(`${path}.map`, "utf8"))) : null;
+    sourceMaps.set(path, map);
   }
-  if (url.startsWith("node:")) return url;
+  const entry = map?.findEntry(line, column);
+  if (!entry || !("originalSource" in entry) || !entry.originalSource) return null;
+  return { source: entry.originalSource.replace(/^.*\[project\]\//, "").replace(/^(\.\.\/)+/, ""), line: entry.originalLine + 1 };
+}
+
+/** A package, a file of this tree, or a part of Node.js. */
+function where(frame: ProfileNode["callFrame"]): { place: string; line: number } {
+  const { url } = frame;
+  if (!url) return { place: "(native, GC, idle)", line: 0 };
+  const mapped = original(url, frame.lineNumber, frame.columnNumber);
+  if (mapped) return { place: packageOf(mapped.source) ?? mapped.source, line: mapped.line };
+  const name = packageOf(url);
+  // Next's own server files: name the folder.
+  if (name) return { place: name === "next" ? `next/${url.slice(url.lastIndexOf("node_modules/next/") + 18).split("/").slice(0, 3).join("/")}` : name, line: frame.lineNumber + 1 };
+  if (url.startsWith("node:")) return { place: url, line: frame.lineNumber + 1 };
   const chunk = url.indexOf("/server/");
-  return chunk >= 0 ? `app build: ${url.slice(chunk + 1)}` : url;
+  return { place: chunk >= 0 ? `app build: ${url.slice(chunk + 1)}` : url, line: frame.lineNumber + 1 };
 }
 
 async function main() {
@@ -56,8 +83,10 @@ async function main() {
   const chosen = options[route];
   if (!chosen) throw new Error(`Choose one of: ${Object.keys(options).join(", ")}.`);
   const run = (amount: number) => new Promise((resolve, reject) => autocannon({ ...chosen, connections: 10, amount }, (error, result) => (error ? reject(error) : resolve(result))));
-  await run(Math.min(1000, requests)); // warm-up, in the profile too; small against the measured run
+  await run(Math.min(1000, requests)); // warm-up: its samples (and the server's start) are left out below
+  const from = nowUs();
   await run(requests);
+  const to = nowUs();
   await server.stop();
   database.remove();
 
@@ -65,8 +94,13 @@ async function main() {
   if (!file) throw new Error(`No profile was written in ${dir}.`);
   const profile = JSON.parse(readFileSync(join(dir, file), "utf8")) as Profile;
   const byId = new Map(profile.nodes.map((node) => [node.id, node]));
+  // Only the samples taken while the measured requests ran: the start and the warm-up are not a request's cost.
   const self = new Map<number, number>();
-  profile.samples.forEach((id, i) => self.set(id, (self.get(id) ?? 0) + (profile.timeDeltas[i] ?? 0)));
+  let at = profile.startTime;
+  profile.samples.forEach((id, i) => {
+    at += profile.timeDeltas[i] ?? 0;
+    if (at >= from && at <= to) self.set(id, (self.get(id) ?? 0) + (profile.timeDeltas[i] ?? 0));
+  });
   const byPlace = new Map<string, number>();
   const byFunction = new Map<string, number>();
   let total = 0;
@@ -74,14 +108,20 @@ async function main() {
     const node = byId.get(id)!;
     if (node.callFrame.functionName === "(idle)") continue;
     total += us;
-    const place = where(node.callFrame.url);
+    const { place, line } = where(node.callFrame);
     byPlace.set(place, (byPlace.get(place) ?? 0) + us);
-    const name = `${node.callFrame.functionName || "(anonymous)"} ${place}:${node.callFrame.lineNumber + 1}`;
+    const name = `${node.callFrame.functionName || "(anonymous)"} ${place}:${line}`;
     byFunction.set(name, (byFunction.get(name) ?? 0) + us);
   }
   const top = (map: Map<string, number>, n: number) =>
-    [...map].sort((a, b) => b[1] - a[1]).slice(0, n).map(([name, us]) => `  ${((100 * us) / total).toFixed(1).padStart(5)} %  ${name}`).join("\n");
-  console.log(`${route}: ${requests} requests after a warm-up; busy CPU ${(total / 1000).toFixed(0)} ms in the profile (${join(dir, file)})`);
+    [...map]
+      .sort((a, b) => b[1] - a[1])
+      .slice(0, n)
+      .map(([name, us]) => `  ${((100 * us) / total).toFixed(1).padStart(5)} %  ${(us / requests).toFixed(1).padStart(6)} µs/request  ${name}`)
+      .join("\n");
+  console.log(
+    `${route}: ${requests} requests after a warm-up; busy CPU ${(total / 1000).toFixed(0)} ms while they ran, ${(total / requests).toFixed(0)} µs a request (${join(dir, file)})`,
+  );
   console.log(`Self time by place:\n${top(byPlace, 25)}`);
   console.log(`Heaviest functions:\n${top(byFunction, 30)}`);
 }
