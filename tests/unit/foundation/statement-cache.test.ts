@@ -40,6 +40,41 @@ describe("prepared statements kept per connection", () => {
     expect(await count("d")).toBe(2);
   });
 
+  it("remembers a kept statement's columns and that a write returns no rows, and still answers each run", async () => {
+    const db = new Database(":memory:");
+    db.exec("CREATE TABLE counters (key TEXT PRIMARY KEY, n INTEGER NOT NULL)");
+    const select = db.prepare("SELECT key, n FROM counters");
+    expect(select.columns()).toBe(select.columns());
+    expect(select.columns().map((column: { name: string }) => column.name)).toEqual(["key", "n"]);
+    const insert = db.prepare("INSERT INTO counters (key, n) VALUES (?, 1)");
+    const first = (() => {
+      try {
+        insert.raw(true);
+      } catch (error) {
+        return error;
+      }
+    })();
+    expect(first).toBeInstanceOf(Error);
+    expect(() => insert.raw(true)).toThrow(first as Error);
+    expect(insert.run(["a"]).changes).toBe(1);
+    const upsert = "INSERT INTO counters (key, n) VALUES (?, 1) ON CONFLICT (key) DO UPDATE SET n = n + 1 RETURNING n";
+    for (const expected of [2, 3]) {
+      const statement = db.prepare(upsert);
+      statement.raw(true);
+      expect(statement.get(["a"])).toEqual([expected]);
+    }
+    // Through the client: a write's rowsAffected, a RETURNING's rows, run after run.
+    await client.execute("CREATE TABLE IF NOT EXISTS tallies (key TEXT PRIMARY KEY, n INTEGER NOT NULL)");
+    for (const expected of [1, 2, 3]) {
+      const returned = await client.execute({ sql: "INSERT INTO tallies (key, n) VALUES (?, 1) ON CONFLICT (key) DO UPDATE SET n = n + 1 RETURNING n", args: ["k"] });
+      expect(returned.columns).toEqual(["n"]);
+      expect(Number(returned.rows[0]!.n)).toBe(expected);
+      const written = await client.execute({ sql: "UPDATE tallies SET n = n WHERE key = ?", args: ["k"] });
+      expect(written.rowsAffected).toBe(1);
+    }
+    db.close();
+  });
+
   it("still answers rightly after the table changes shape", async () => {
     const select = "SELECT * FROM rows ORDER BY id LIMIT 1";
     expect((await client.execute(select)).columns).toEqual(["id", "kind"]);
