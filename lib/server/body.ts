@@ -42,6 +42,8 @@ export async function readLimitedBytes(request: Request, limit: Limit): Promise<
   } catch {
     return { ok: false, response: badRequest({ [limit.field]: ["The body could not be read to its end."] }, "The body could not be read to its end.") };
   }
+  // A small body arrives in one chunk: hand it on as it is.
+  if (chunks.length === 1) return { ok: true, value: chunks[0] as Uint8Array<ArrayBuffer> };
   const bytes = new Uint8Array(total);
   let at = 0;
   for (const chunk of chunks) {
@@ -50,6 +52,9 @@ export async function readLimitedBytes(request: Request, limit: Limit): Promise<
   }
   return { ok: true, value: bytes };
 }
+
+/** Decoding without `stream` keeps no state between calls, so one decoder serves every request. */
+const utf8 = new TextDecoder("utf-8", { fatal: true });
 
 function mediaType(request: Request): string {
   return (request.headers.get("content-type") ?? "").split(";")[0]!.trim().toLowerCase();
@@ -64,7 +69,7 @@ export async function readJsonBody(request: Request, limit: Limit): Promise<Read
   const read = await readLimitedBytes(request, limit);
   if (!read.ok) return read;
   try {
-    return { ok: true, value: JSON.parse(new TextDecoder("utf-8", { fatal: true }).decode(read.value)) };
+    return { ok: true, value: JSON.parse(utf8.decode(read.value)) };
   } catch {
     return { ok: false, response: badRequest({ [limit.field]: ["The body is not valid JSON."] }, "The body is not valid JSON.") };
   }
@@ -91,12 +96,16 @@ export async function readMultipartBody(request: Request, limit: Limit): Promise
  * (the customer's pages) makes the browser send `Origin: null`; that passes only beside
  * `Sec-Fetch-Site: same-origin`, a header no page can set.
  */
+let own = { url: "", origin: "" };
+
 export function refuseForeignOrigin(request: Request): Response | null {
   const origin = request.headers.get("origin");
   const site = request.headers.get("sec-fetch-site");
-  const own = new URL(env.APP_URL).origin;
+  // Parsed once, not on every request (again only if the setting were to change).
+  if (own.url !== env.APP_URL) own = { url: env.APP_URL, origin: new URL(env.APP_URL).origin };
+  const ownOrigin = own.origin;
   const opaqueFromHere = origin === "null" && site === "same-origin";
-  if ((origin !== null && origin !== own && !opaqueFromHere) || site === "cross-site") {
+  if ((origin !== null && origin !== ownOrigin && !opaqueFromHere) || site === "cross-site") {
     return json({ ok: false, error: "forbidden", message: "This request came from another site and was refused." }, 403);
   }
   return null;

@@ -22,6 +22,10 @@ export function clientAddressFrom(list: Headers, trustedHops: number): string {
   return hops[Math.max(0, hops.length - trustedHops)]!;
 }
 
-export async function clientAddress(): Promise<string> {
-  return clientAddressFrom(await headers(), env.TRUSTED_PROXY_HOPS);
+/**
+ * A route handler passes its request's headers (the same headers `headers()` answers, without the request
+ * scope's lookup); server actions and pages call it without.
+ */
+export async function clientAddress(list?: Headers): Promise<string> {
+  return clientAddressFrom(list ?? (await headers()), env.TRUSTED_PROXY_HOPS);
 }

@@ -16,7 +16,7 @@ const LIMIT = { bytes: 64 * 1024, message: "The rig must be under 64 KiB of JSON
 export async function POST(request: Request) {
   const foreign = refuseForeignOrigin(request);
   if (foreign) return foreign;
-  const limit = await consume(`evaluate:${await clientAddress()}`, env.EVALUATE_LIMIT_PER_MINUTE, 60_000);
+  const limit = await consume(`evaluate:${await clientAddress(request.headers)}`, env.EVALUATE_LIMIT_PER_MINUTE, 60_000);
   if (!limit.allowed) {
     return json({ error: "rate_limited", message: "Too many requests. Try again shortly." }, 429, { "retry-after": String(limit.retryAfterSeconds) });
   }
