@@ -4,7 +4,7 @@ import { mkdirSync } from "node:fs";
 import { dirname, resolve } from "node:path";
 import { env } from "../lib/env";
 import * as schema from "./schema";
-import { scopedTransactions, serialClient } from "./serial-client";
+import { scopedTransactions, serialClient, type NativeConnection, type SerialClient } from "./serial-client";
 import { installStatementCache } from "./statement-cache";
 
 export type Database = LibSQLDatabase<typeof schema>;
@@ -13,6 +13,8 @@ interface DatabaseHandle {
   client: Client;
   db: Database;
   ready: Promise<void>;
+  /** A local file's connection itself, in its turn (db/serial-client.ts); absent for a libSQL server. */
+  onConnection?: SerialClient["onConnection"];
 }
 
 /**
@@ -29,7 +31,8 @@ function open(url: string, authToken: string | undefined): DatabaseHandle {
     if (path && path !== ":memory:") mkdirSync(dirname(resolve(path)), { recursive: true });
   }
   if (isLocalFile) installStatementCache();
-  const client = isLocalFile ? serialClient(createClient({ url, concurrency: 1, timeout: 5000 })) : createClient({ url, authToken });
+  const serial = isLocalFile ? serialClient(createClient({ url, concurrency: 1, timeout: 5000 })) : undefined;
+  const client = serial ?? createClient({ url, authToken });
   const ready = (async () => {
     if (isLocalFile) {
       await client.execute("PRAGMA journal_mode = WAL");
@@ -39,7 +42,7 @@ function open(url: string, authToken: string | undefined): DatabaseHandle {
     await client.execute("PRAGMA foreign_keys = ON");
   })();
   const db = drizzle(client, { schema });
-  return { client, db: isLocalFile ? scopedTransactions(db) : db, ready };
+  return { client, db: isLocalFile ? scopedTransactions(db) : db, ready, onConnection: serial?.onConnection };
 }
 
 const globalForDb = globalThis as unknown as { towmarginDb?: DatabaseHandle };
@@ -56,4 +59,15 @@ export async function getDb(): Promise<Database> {
   const handle = databaseHandle();
   await handle.ready;
   return handle.db;
+}
+
+/**
+ * One statement on a local file's connection itself, in its turn with every other statement, for the few
+ * statements a request always runs (the rate limit's): it skips Drizzle's and the client's layers. Undefined
+ * where there is no such connection (a libSQL server): then go through `getDb()`.
+ */
+export async function onConnection<T>(work: (connection: NativeConnection) => T): Promise<T | undefined> {
+  const handle = databaseHandle();
+  await handle.ready;
+  return handle.onConnection ? handle.onConnection(work) : undefined;
 }

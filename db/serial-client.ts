@@ -1,5 +1,29 @@
 import type { Client, InArgs, InStatement, ResultSet, Transaction, TransactionMode } from "@libsql/client";
 import { AsyncLocalStorage } from "node:async_hooks";
+import { claimConnection, CONNECTION_MARKER } from "./statement-cache";
+
+/** The few methods of a libSQL connection (the `libsql` package's Database) that `onConnection` work uses. */
+export interface NativeConnection {
+  readonly open: boolean;
+  prepare(sql: string): NativeStatement;
+}
+export interface NativeStatement {
+  raw(toggle?: boolean): NativeStatement;
+  get(args: unknown[]): unknown;
+}
+
+/** The serial client, and its connection for work that must cost as little as a statement can. */
+export type SerialClient = Client & {
+  /**
+   * Runs `work` on the connection itself, in its turn like any statement (so never inside another caller's
+   * transaction), and answers what it returns; undefined when the connection cannot be reached (the
+   * statement cache is not installed), for the caller to go through the client instead. `work` must be one
+   * synchronous statement: it skips the client's and Drizzle's layers, not the gate.
+   */
+  onConnection<T>(work: (connection: NativeConnection) => T): Promise<T | undefined>;
+};
+
+let markers = 0;
 
 /**
  * A local SQLite file through one connection, one statement or one transaction at a time.
@@ -21,7 +45,7 @@ import { AsyncLocalStorage } from "node:async_hooks";
  * an error that says so, instead of freezing every query of the process. `close()` is for shutting down;
  * `reconnect()` is refused (a new connection would lack the PRAGMAs).
  */
-export function serialClient(inner: Client): Client {
+export function serialClient(inner: Client): SerialClient {
   let tail: Promise<unknown> = Promise.resolve();
   /** The scope of the transaction now holding the gate, if any. */
   let open: object | null = null;
@@ -65,7 +89,21 @@ export function serialClient(inner: Client): Client {
     });
   }
 
-  const client: Client = {
+  /** The client's one connection (concurrency 1), asked for once and again only if it was closed. */
+  let connection: NativeConnection | undefined;
+  async function reach(): Promise<NativeConnection | undefined> {
+    if (connection?.open) return connection;
+    const marker = `${CONNECTION_MARKER}${process.pid}_${++markers}`;
+    await inner.execute(marker);
+    connection = claimConnection(marker) as NativeConnection | undefined;
+    return connection;
+  }
+
+  const client: SerialClient = {
+    onConnection<T>(work: (connection: NativeConnection) => T): Promise<T | undefined> {
+      // Known and open: run it at once in its turn, with no other promise in between.
+      return inTurn(() => (connection?.open ? Promise.resolve(work(connection)) : reach().then((reached) => (reached ? work(reached) : undefined))));
+    },
     execute(stmtOrSql: InStatement | string, args?: InArgs): Promise<ResultSet> {
       return inTurn(() => (typeof stmtOrSql === "string" ? inner.execute(stmtOrSql, args) : inner.execute(stmtOrSql)));
     },
@@ -84,7 +122,7 @@ export function serialClient(inner: Client): Client {
     get protocol() {
       return inner.protocol;
     },
-  } as Client;
+  } as SerialClient;
   return client;
 }
 

@@ -5,7 +5,7 @@ vi.hoisted(() => {
 });
 
 import { createClient } from "@libsql/client";
-import { getDb } from "@/db/client";
+import { getDb, onConnection } from "@/db/client";
 import { applyMigrations } from "@/db/migrate";
 import { rateLimits } from "@/db/schema";
 import { consume, resetRateLimits } from "@/lib/server/rate-limit";
@@ -52,6 +52,16 @@ describe("rate limit", () => {
     }
     expect((await consume("evaluate:192.0.2.7", 4, 60_000, now + 1)).allowed).toBe(true); // the fourth
     expect((await consume("evaluate:192.0.2.7", 4, 60_000, now + 2)).allowed).toBe(false); // the fifth
+  });
+
+  it("counts on the local file's connection itself, with the same SQL Drizzle writes for it", async () => {
+    // The statement the counter runs directly; a libSQL server (no such connection) goes through Drizzle.
+    expect(await onConnection((connection) => connection.open)).toBe(true);
+    const now = Date.now();
+    expect(await consume("direct:192.0.2.9", 1, 60_000, now)).toEqual({ allowed: true, retryAfterSeconds: 60 });
+    expect(await consume("direct:192.0.2.9", 1, 60_000, now + 1_500)).toEqual({ allowed: false, retryAfterSeconds: 59 });
+    const db = await getDb();
+    expect(await db.select().from(rateLimits)).toEqual([{ key: "direct:192.0.2.9", count: 2, resetAt: now + 60_000 }]);
   });
 
   it("loses no count when many checks of one key arrive at once", async () => {

@@ -5,10 +5,11 @@ import { join } from "node:path";
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
 import { drizzle } from "drizzle-orm/libsql";
 import { integer, sqliteTable, text } from "drizzle-orm/sqlite-core";
-import { scopedTransactions, serialClient } from "@/db/serial-client";
+import { scopedTransactions, serialClient, type SerialClient } from "@/db/serial-client";
+import { installStatementCache } from "@/db/statement-cache";
 
 let dir: string;
-let client: Client;
+let client: SerialClient;
 
 beforeEach(async () => {
   dir = mkdtempSync(join(tmpdir(), "towmargin-serial-"));
@@ -27,6 +28,20 @@ const count = async (kind?: string) =>
   Number((await client.execute(kind ? { sql: "SELECT count(*) AS n FROM rows WHERE kind = ?", args: [kind] } : "SELECT count(*) AS n FROM rows")).rows[0]!.n);
 
 describe("the local database client", () => {
+  it("runs work on the connection itself in its turn: never inside another caller's transaction", async () => {
+    installStatementCache();
+    const tx = await client.transaction("write");
+    await tx.execute({ sql: "INSERT INTO rows (kind) VALUES (?)", args: ["in-tx"] });
+    const direct = client.onConnection((connection) => connection.prepare("SELECT count(*) FROM rows").raw(true).get([]));
+    await new Promise((resolve) => setTimeout(resolve, 20));
+    await tx.rollback();
+    // It waited for the rollback, so it counts no row; then it writes and reads on the client's connection.
+    expect(await direct).toEqual([0]);
+    await client.onConnection((connection) => connection.prepare("INSERT INTO rows (kind) VALUES (?)").get(["direct"]));
+    expect(await count("direct")).toBe(1);
+    expect(await client.onConnection((connection) => connection.prepare("PRAGMA synchronous").raw(true).get([]))).toEqual([1]);
+  });
+
   it("answers every statement of a burst on the one connection that got the settings", async () => {
     // 1 is NORMAL. Without the gate the pool opens more connections under a burst, and those report 2 (FULL).
     const answers = await Promise.all(Array.from({ length: 40 }, () => client.execute("PRAGMA synchronous")));
