@@ -72,6 +72,17 @@ export function LiveVerdict({ control, kind, tightMarginRatio, frontAxleLossLimi
     panel.scrollIntoView({ block: "start" });
     panel.focus({ preventScroll: true });
   }, [open]);
+  // Desktop: when the panel's headline is out of view (the panel pushed up at the foot of the form, or scrolled
+  // inside), a compact line of the verdict stays at the top of the column instead.
+  const [headlineOut, setHeadlineOut] = useState(false);
+  const shownLevel = shown?.result.verdict.level;
+  useEffect(() => {
+    const headline = asideRef.current?.querySelector('[data-testid="verdict-level"]');
+    if (!headline || typeof IntersectionObserver === "undefined") return;
+    const observer = new IntersectionObserver(([entry]) => setHeadlineOut(!entry!.isIntersecting));
+    observer.observe(headline);
+    return () => observer.disconnect();
+  }, [shownLevel]);
   // The drawing follows a moment after the verdict (a deferred render), so typing never waits for it.
   const deferredValues = useDeferredValue(values);
   const sideRig = useMemo(() => toRigCandidate(deferredValues, kind) as RigInput, [deferredValues, kind]);
@@ -138,6 +149,20 @@ export function LiveVerdict({ control, kind, tightMarginRatio, frontAxleLossLimi
           open ? "fixed inset-x-2 top-16 bottom-2 z-30 block overflow-y-auto overscroll-contain rounded-card" : "hidden",
         )}
       >
+        {/* Takes no room: shown over the panel only while the panel's own headline is out of view. */}
+        <div className="sticky top-0 z-10 hidden h-0 lg:block">
+          <div
+            data-testid="verdict-compact"
+            data-shown={headlineOut || undefined}
+            aria-hidden={!headlineOut}
+            className={cn("absolute inset-x-0 top-0 bg-paper pt-4 transition-opacity duration-150 motion-reduce:transition-none", headlineOut ? "opacity-100" : "pointer-events-none invisible opacity-0")}
+          >
+            <div className="flex items-center gap-3 rounded-card border border-rule bg-panel px-3 py-2 shadow-card">
+              <VerdictBadge status={level} label={waiting ? `${levelWords[level]} (waiting)` : levelWords[level]} />
+              <span className="min-w-0 flex-1 truncate text-sm text-ink">{withoutLevelWord(result.verdict.message)}</span>
+            </div>
+          </div>
+        </div>
         <div className="space-y-3 lg:sticky lg:top-4 lg:max-h-[calc(100dvh-2rem)] lg:overflow-y-auto lg:pr-1">
           <Card className={cn("px-4 py-4 sm:px-5", waiting && "opacity-95")}>
             {waitingNote ? <div className="mb-4">{waitingNote}</div> : null}
