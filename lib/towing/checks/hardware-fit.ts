@@ -61,35 +61,42 @@ export function checkHardwareFit(d: Derived, c: Ctx): HardwareFitResult | null {
   }
   if (t.ballSize !== undefined && d.gtw !== undefined) {
     const cls = trailerClassOf(d.gtw);
-    const min = cls !== undefined ? MIN_BALL_BY_CLASS[cls] : undefined;
-    if (min === undefined) {
-      // Class 4 (over 5,000 lb) and beyond set no diameter: the ball's rating (a weakest-link) and the coupler decide.
-      ballPart.status = "within";
-      if (detail)
+    const tableMin = cls !== undefined ? MIN_BALL_BY_CLASS[cls] : undefined;
+    // Above class 3 the table sets no diameter (the ball's rating, a weakest-link, and the coupler decide), and a
+    // heavier trailer never takes a smaller ball than a lighter one: class 3's diameter stays the floor.
+    const min = tableMin ?? MIN_BALL_BY_CLASS[3]!;
+    const ball = inches(t.ballSize);
+    const least = inches(min);
+    ballPart.actual = qL(c, ball);
+    ballPart.limit = qL(c, least);
+    ballPart.status = ball + 1e-9 >= least ? "within" : "adjust";
+    if (detail) {
+      if (tableMin === undefined)
         cautions.push(
           cls === 4
             ? "Over 5,000 lb (class 4) the table sets no ball diameter: the ball and its bolt must be as strong as the coupler needs (15 CRR-NY 57.5 Table 1); the ball's stamped rating is checked with the other links."
             : "Over 10,000 lb the trailer is outside the hitch classes: the ball's stamped rating and the coupler's decide, and are checked with the other links.",
         );
-    } else {
-      const ball = inches(t.ballSize);
-      const least = inches(min);
-      ballPart.actual = qL(c, ball);
-      ballPart.limit = qL(c, least);
-      ballPart.status = ball + 1e-9 >= least ? "within" : "adjust";
-      if (detail) {
-        steps.push({
-          id: "ball-size-room",
-          title: "Ball diameter over the class's smallest",
-          formulaWords: "The ball's diameter minus the smallest the trailer's class allows (negative: too small)",
-          formula: "D_ball - D_min",
-          inputs: [iL(c, "D_ball", `Ball diameter (${t.ballSize} in)`, ball), iL(c, "D_min", `Smallest ball for class ${cls} (${min} in)`, least)],
-          result: rL(c, "M_ball", ball - least),
-          note: `15 CRR-NY 57.5 Table 1: a class ${cls} trailer (up to ${fW(c, CLASS_MAX_GTW[cls!]!)} gross) needs a ball of at least ${min} in.`,
-        });
-        if (ballPart.status === "adjust")
-          advice.push(`Fit a ball of at least ${min} in, with a coupler to match: a ${t.ballSize} in ball is too small for a class ${cls} trailer.`);
-      }
+      steps.push({
+        id: "ball-size-room",
+        title: "Ball diameter over the class's smallest",
+        formulaWords: "The ball's diameter minus the smallest the trailer's class allows (negative: too small)",
+        formula: "D_ball - D_min",
+        inputs: [
+          iL(c, "D_ball", `Ball diameter (${t.ballSize} in)`, ball),
+          iL(c, "D_min", tableMin ? `Smallest ball for class ${cls} (${min} in)` : `Smallest ball for class 3, the floor above it (${min} in)`, least),
+        ],
+        result: rL(c, "M_ball", ball - least),
+        note: tableMin
+          ? `15 CRR-NY 57.5 Table 1: a class ${cls} trailer (up to ${fW(c, CLASS_MAX_GTW[cls!]!)} gross) needs a ball of at least ${min} in.`
+          : `15 CRR-NY 57.5 Table 1 sets no diameter above class 3 (up to ${fW(c, CLASS_MAX_GTW[3]!)} gross); a heavier trailer takes no smaller ball than class 3's ${min} in.`,
+      });
+      if (ballPart.status === "adjust")
+        advice.push(
+          tableMin
+            ? `Fit a ball of at least ${min} in, with a coupler to match: a ${t.ballSize} in ball is too small for a class ${cls} trailer.`
+            : `Fit a ball of at least ${min} in, with a coupler to match: a ${t.ballSize} in ball is smaller than even a class 3 trailer (up to ${fW(c, CLASS_MAX_GTW[3]!)}) needs.`,
+        );
     }
   }
   parts.push(ballPart);

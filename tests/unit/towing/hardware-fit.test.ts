@@ -52,8 +52,16 @@ describe("hardware fit", () => {
     // Source: 15 CRR-NY 57.5 Table 1: class 4 (over 5,000 up to 10,000 lb): the ball and bolt match the strength the coupler needs
     const c = fit(pickupRig({ trailer: { grossTrailerWeight: 6000, tongueWeight: 700 } }));
     expect(part(c, "ball-size").status).toBe("within");
-    expect(c.steps.some((s) => s.id === "ball-size-room")).toBe(false);
     expect(c.cautions.join(" ")).toMatch(/Over 5,000 lb \(class 4\) the table sets no ball diameter/);
+  });
+
+  it("never lets a heavier trailer take a smaller ball than class 3 needs", () => {
+    // Source: 15 CRR-NY 57.5 Table 1: class 3 (up to 5,000 lb) needs at least a 2 in ball; the table sets none above.
+    // Geometry: 1.875 − 2 = −0.125 in: a 1-7/8 in ball on a 6,000 lb trailer is below that floor, a part to change.
+    const c = fit(pickupRig({ trailer: { grossTrailerWeight: 6000, tongueWeight: 700, ballSize: "1-7/8" } }));
+    expect(part(c, "ball-size").status).toBe("adjust");
+    expect(c.steps.find((s) => s.id === "ball-size-room")!.result.value).toBe(-0.125);
+    expect(c.advice.join(" ")).toMatch(/at least 2 in.*smaller than even a class 3 trailer/);
   });
 
   it("a shank thicker than the hole does not go in: adjust", () => {
