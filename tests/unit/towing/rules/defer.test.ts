@@ -5,7 +5,10 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { evaluateRig, evaluateRigFast, RULE_SETS, type Place } from "@/lib/towing";
+import { fixPropertySeed } from "../property-seed";
 import { local, trailerRig } from "./support";
+
+fixPropertySeed();
 
 const PLACES: Place[] = [
   { country: "US", region: "CA" },
